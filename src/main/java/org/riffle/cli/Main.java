@@ -1,0 +1,46 @@
+package org.riffle.cli;
+
+import java.io.PrintWriter;
+import org.riffle.log.LogException;
+import picocli.CommandLine;
+
+/** The entry point: builds the command line, runs it, exits with its status. */
+public final class Main {
+    private Main() {
+    }
+
+    public static void main(String[] args) {
+        System.exit(run(args, new PrintWriter(System.out, true), new PrintWriter(System.err, true)));
+    }
+
+    /** Runs riffle with {@code args}, writing to {@code out} and {@code err}; returns the exit status. */
+    public static int run(String[] args, PrintWriter out, PrintWriter err) {
+        return commandLine(out, err).execute(args);
+    }
+
+    /** The configured command line, for tests and for {@link #run}. */
+    static CommandLine commandLine(PrintWriter out, PrintWriter err) {
+        CommandLine cl = new CommandLine(new RiffleCommand());
+        cl.setOut(out);
+        cl.setErr(err);
+        cl.setExecutionExceptionHandler((ex, commandLine, parseResult) -> {
+            PrintWriter e = commandLine.getErr();
+            if (ex instanceof LogException) {
+                e.println("riffle: " + ex.getMessage());
+                return ExitCode.BAD_INPUT;
+            }
+            e.println("riffle: internal error: " + ex + " (set RIFFLE_DEBUG=1 for details; please report)");
+            if (System.getenv("RIFFLE_DEBUG") != null) {
+                ex.printStackTrace(e);
+            }
+            return ExitCode.INTERNAL;
+        });
+        cl.setParameterExceptionHandler((ex, args) -> {
+            CommandLine c = ex.getCommandLine();
+            c.getErr().println("riffle: " + ex.getMessage());
+            c.getErr().println("Try '" + c.getCommandSpec().qualifiedName() + " --help' for more.");
+            return ExitCode.USAGE;
+        });
+        return cl;
+    }
+}

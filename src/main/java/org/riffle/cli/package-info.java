@@ -1,0 +1,4 @@
+/**
+ * picocli commands: wiring only. The only package that imports picocli.
+ */
+package org.riffle.cli;

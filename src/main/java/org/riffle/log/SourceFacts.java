@@ -1,0 +1,27 @@
+package org.riffle.log;
+
+import java.util.List;
+import java.util.Objects;
+
+/**
+ * Where a recording came from and how it was read: the file as named, its size, the dialect that was
+ * detected or given, the encoding, the preamble lines before the table, and the warnings collected.
+ * Immutable.
+ *
+ * @param file the file as the user named it ({@code "-"} for standard input)
+ * @param sizeBytes size of the file on disk, -1 when unknown (standard input)
+ * @param format a short description of the format read, e.g. {@code "csv ';' decimal ','"} or {@code "wav pcm 16-bit"}
+ * @param encoding the character encoding used, {@code ""} for binary formats
+ * @param preamble lines before the table (device, serial, interval, comments), as read
+ * @param warnings things the reader noticed and the user should know, each one line
+ */
+public record SourceFacts(String file, long sizeBytes, String format, String encoding,
+                          List<String> preamble, List<String> warnings) {
+    public SourceFacts {
+        Objects.requireNonNull(file, "file");
+        Objects.requireNonNull(format, "format");
+        Objects.requireNonNull(encoding, "encoding");
+        preamble = List.copyOf(preamble);
+        warnings = List.copyOf(warnings);
+    }
+}
