@@ -7,10 +7,10 @@ import java.util.concurrent.Callable;
 import org.riffle.log.Channel;
 import org.riffle.log.LogException;
 import org.riffle.log.LogReader;
-import org.riffle.log.ReadOptions;
 import org.riffle.log.Recording;
 import org.riffle.signal.Summary;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
@@ -22,12 +22,15 @@ final class ChannelsCommand implements Callable<Integer> {
     @Spec
     private CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "LOG", description = "The log file to read.")
+    @Parameters(index = "0", paramLabel = "LOG", description = "The log file to read ('-' for standard input).")
     private Path log;
+
+    @Mixin
+    private ReadOptionsMixin read;
 
     @Override
     public Integer call() throws LogException {
-        Recording rec = LogReader.read(log, ReadOptions.defaults());
+        Recording rec = LogReader.read(log, read.toReadOptions());
         PrintWriter out = spec.commandLine().getOut();
         for (Channel c : rec.channels()) {
             Summary s = Summary.of(c.toDoubles());
