@@ -30,7 +30,8 @@ class ManPageTest {
     /** The page's text with troff's escaped hyphens and font changes undone. */
     static String manText() throws IOException {
         String s = Files.readString(MAN, StandardCharsets.UTF_8);
-        return s.replace("\\-", "-").replaceAll("\\\\f[BIRP]", "").replace("\\&", "");
+        return s.replace("\\-", "-").replaceAll("\\\\f[BIRP]", "").replace("\\&", "").replace("\\%", "")
+                .replace("\\:", "");
     }
 
     private static List<CommandSpec> allCommands() {
