@@ -6,6 +6,7 @@ import java.util.Optional;
 import java.util.function.ToDoubleFunction;
 import org.riffle.log.Channel;
 import org.riffle.log.TimeBase;
+import org.riffle.signal.Sparkline;
 import org.riffle.triage.Baseline;
 import org.riffle.triage.ChannelAssessment;
 import org.riffle.triage.Level;
@@ -14,7 +15,7 @@ import org.riffle.tui.Canvas.Style;
 
 /**
  * One channel in detail: a trace of the shown time window (each column the range of the samples it
- * covers) with the baseline span and the cursor marked, a time axis, the windowed trends (DET, LAM,
+ * covers, drawn by {@link Sparkline}) with the baseline span and the cursor marked, a time axis, the windowed trends (DET, LAM,
  * novelty, level) aligned column for column under it, a read-out at the cursor, and panels of figures
  * below ({@link Figures}).
  *
@@ -90,18 +91,10 @@ final class DetailView {
     }
 
     private static void trace(Canvas c, ScreenState s, Channel ch, Layout l, int w) {
-        double[][] r = Spark.ranges(ch, s.from, s.to, w);
-        double lo = Double.POSITIVE_INFINITY;
-        double hi = Double.NEGATIVE_INFINITY;
-        for (int i = 0; i < w; i++) {
-            if (!Double.isNaN(r[0][i])) {
-                lo = Math.min(lo, r[0][i]);
-                hi = Math.max(hi, r[1][i]);
-            }
-        }
         int h = l.traceRows();
-        c.right(0, l.traceTop(), Text.num(hi, GUTTER - 1), GUTTER - 1, Style.PLAIN);
-        c.right(0, l.traceTop() + h - 1, Text.num(lo, GUTTER - 1), GUTTER - 1, Style.PLAIN);
+        SparkCache.Trace t = s.sparks.trace(s.row(), ch, s.from, s.to, w, h, !c.glyphs.ascii());
+        c.right(0, l.traceTop(), Text.num(t.max(), GUTTER - 1), GUTTER - 1, Style.PLAIN);
+        c.right(0, l.traceTop() + h - 1, Text.num(t.min(), GUTTER - 1), GUTTER - 1, Style.PLAIN);
         c.right(0, l.traceTop() + h / 2, ch.unit(), GUTTER - 1, Style.DIM);
         Baseline b = s.source().baseline();
         int cursorCol = columnOf(s, s.cursor, w);
@@ -109,26 +102,10 @@ final class DetailView {
             int sample = sampleAt(s, col, w);
             boolean inBase = sample >= b.fromRow() && sample < b.toRow();
             Style st = col == cursorCol ? Style.REVERSE : inBase ? Style.BASELINE : Style.PLAIN;
-            int top = h;
-            int bottom = -1;
-            if (!Double.isNaN(r[0][col])) {
-                top = rowOf(r[1][col], lo, hi, h);
-                bottom = rowOf(r[0][col], lo, hi, h);
-            }
             for (int y = 0; y < h; y++) {
-                char g = y >= top && y <= bottom ? c.glyphs.full : ' ';
-                c.put(GUTTER + col, l.traceTop() + y, g, st);
+                c.put(GUTTER + col, l.traceTop() + y, t.rows().get(y).charAt(col), st);
             }
         }
-    }
-
-    /** Screen row (0 = top) of value {@code v} on a scale {@code [lo, hi]} over {@code h} rows. */
-    static int rowOf(double v, double lo, double hi, int h) {
-        if (!(hi > lo)) {
-            return h / 2;
-        }
-        int fromBottom = (int) Math.floor((v - lo) / (hi - lo) * (h - 1e-9));
-        return h - 1 - Math.max(0, Math.min(h - 1, fromBottom));
     }
 
     private static void axis(Canvas c, TimeBase tb, ScreenState s, Layout l, int w) {
@@ -156,23 +133,16 @@ final class DetailView {
     private static void trendRow(Canvas c, ScreenState s, List<WindowRow> trend, String label,
                                  ToDoubleFunction<WindowRow> f, int row, int w) {
         c.right(0, row, label, GUTTER - 1, Style.PLAIN);
-        double lo = Double.POSITIVE_INFINITY;
-        double hi = Double.NEGATIVE_INFINITY;
-        for (WindowRow x : trend) {
-            double v = f.applyAsDouble(x);
-            if (!Double.isNaN(v)) {
-                lo = Math.min(lo, v);
-                hi = Math.max(hi, v);
-            }
+        if (trend.isEmpty()) {
+            c.text(GUTTER, row, String.valueOf(c.glyphs.dot).repeat(w), Style.DIM);
+            return;
         }
+        double[] v = new double[w];
         for (int col = 0; col < w; col++) {
             WindowRow x = windowAt(trend, sampleAt(s, col, w));
-            double v = x == null ? Double.NaN : f.applyAsDouble(x);
-            char g = Double.isNaN(v) ? (trend.isEmpty() ? c.glyphs.dot : ' ')
-                    : hi > lo ? c.glyphs.ramp((int) Math.floor((v - lo) / (hi - lo) * (c.glyphs.steps() - 1e-9)))
-                    : c.glyphs.ramp(c.glyphs.steps() / 2);
-            c.put(GUTTER + col, row, g, Style.PLAIN);
+            v[col] = x == null ? Double.NaN : f.applyAsDouble(x);
         }
+        c.text(GUTTER, row, Sparkline.render(v, w, !c.glyphs.ascii()), Style.PLAIN);
     }
 
     private static void levelRow(Canvas c, ScreenState s, List<WindowRow> trend, int row, int w) {

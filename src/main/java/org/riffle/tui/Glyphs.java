@@ -1,73 +1,40 @@
 package org.riffle.tui;
 
 /**
- * The characters the screen draws with: a Unicode set for UTF-8 terminals and a plain ASCII set for
- * everything else. Nothing on screen depends on colour; every flag is a symbol and a word.
+ * The characters the screen draws with besides sparklines (which {@code signal.Sparkline} draws): a
+ * Unicode set for UTF-8 terminals and a plain ASCII set for everything else. Nothing on screen depends
+ * on colour; every flag is a symbol and a word.
  *
  * <p>Immutable.
  */
 final class Glyphs {
-    /** Unicode block elements, lowest to highest. */
-    private static final String UNICODE_RAMP = "▁▂▃▄▅▆▇█";
-    /** An ASCII ramp, lowest to highest. */
-    private static final String ASCII_RAMP = "_.-:=+*#";
-
-    static final Glyphs UNICODE = new Glyphs(false, UNICODE_RAMP, '│', '─', '┼', '█', '▲', '▼', '…', '·',
-            "→", "⏎", "↑↓", "←→", "▌", '░');
-    static final Glyphs ASCII = new Glyphs(true, ASCII_RAMP, '|', '-', '+', '#', '^', 'v', '~', '.',
-            "->", "Enter", "Up/Dn", "Lt/Rt", "|", ':');
+    static final Glyphs UNICODE = new Glyphs(false, '│', '▲', '…', '·', "⏎", "↑↓", "←→");
+    static final Glyphs ASCII = new Glyphs(true, '|', '^', '~', '.', "Enter", "Up/Dn", "Lt/Rt");
 
     private final boolean ascii;
-    private final String ramp;
     final char vertical;
-    final char horizontal;
-    final char cross;
-    final char full;
     final char up;
-    final char down;
     final char ellipsis;
     final char dot;
-    final String arrow;
     final String enter;
     final String upDown;
     final String leftRight;
-    final String cursor;
-    final char shade;
 
-    private Glyphs(boolean ascii, String ramp, char vertical, char horizontal, char cross, char full, char up,
-                   char down, char ellipsis, char dot, String arrow, String enter, String upDown,
-                   String leftRight, String cursor, char shade) {
+    private Glyphs(boolean ascii, char vertical, char up, char ellipsis, char dot, String enter, String upDown,
+                   String leftRight) {
         this.ascii = ascii;
-        this.ramp = ramp;
         this.vertical = vertical;
-        this.horizontal = horizontal;
-        this.cross = cross;
-        this.full = full;
         this.up = up;
-        this.down = down;
         this.ellipsis = ellipsis;
         this.dot = dot;
-        this.arrow = arrow;
         this.enter = enter;
         this.upDown = upDown;
         this.leftRight = leftRight;
-        this.cursor = cursor;
-        this.shade = shade;
     }
 
     /** True for the ASCII set. */
     boolean ascii() {
         return ascii;
-    }
-
-    /** Number of steps of the ramp. */
-    int steps() {
-        return ramp.length();
-    }
-
-    /** Ramp character {@code step} (0 = lowest), clamped to the ramp. */
-    char ramp(int step) {
-        return ramp.charAt(Math.max(0, Math.min(ramp.length() - 1, step)));
     }
 
     /**

@@ -112,7 +112,7 @@ final class ListView {
         col = c.text(col, row, s.remarks.comment(r.source(), r.channel()).isEmpty() ? " " : "*", base);
         col = c.field(col, row, s.label(r), k.name(), base);
         col = c.text(col, row, " ", base);
-        col = c.text(col, row, Spark.line(Spark.ranges(ch, 0, ch.size(), k.spark()), c.glyphs), base);
+        col = c.text(col, row, s.sparks.line(r, ch, k.spark(), !c.glyphs.ascii()), base);
         col = c.text(col, row, " ", base);
         col = c.right(col, row, levelText(a), 8, base);
         col = c.text(col, row, " " + a.flatMap(ChannelAssessment::vibration).map(v -> v.zone()).orElse(" ")

@@ -41,6 +41,8 @@ final class ScreenState {
     int baselineAnchor = -1;
     /** Ticks seen, for the busy marker. */
     long ticks;
+    /** Drawn sparklines and traces, kept while their size stays the same. */
+    final SparkCache sparks = new SparkCache();
 
     ScreenState(List<Source> sources) {
         this.sources = List.copyOf(sources);

@@ -99,7 +99,7 @@ class TriageScreenTest {
         VirtualScreen v = open(80, 24).analysed().type("jj").press(KeyType.Enter);
         String t = v.text();
         assertTrue(v.line(1).startsWith("bearing_temp"), t);
-        long traceCells = t.chars().filter(c -> c == '█').count();
+        long traceCells = t.chars().filter(c -> c >= '\u2581' && c <= '\u2588').count();
         assertTrue(traceCells > 70, "trace has " + traceCells + " cells:\n" + t);
         assertTrue(t.contains("    time │06:00"), t);
         assertTrue(t.contains("baseline ===="), t);
