@@ -131,7 +131,10 @@ class TriageScreenTest {
     @Test
     void markingABaselineRecomputesAgainstIt() throws Exception {
         VirtualScreen v = open(80, 24).analysed().type("\n").type("b").type("lll").type("b");
-        assertTrue(v.text().contains("recomputing against the new baseline, rows 1000-1085"), v.text());
+        Source src = v.loop.controller.s.sources.get(0);
+        assertEquals(1000, src.params().baselineFrom());
+        assertEquals(1085, src.params().baselineTo());
+        assertEquals(2, src.generation(), "analysed again");
         v.analysed();
         v.press(KeyType.Escape);
         assertTrue(v.line(3).startsWith("baseline: rows 1000-1085"), v.line(3));
