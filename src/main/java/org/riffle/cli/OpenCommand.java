@@ -10,10 +10,11 @@ import org.riffle.log.LogException;
 import org.riffle.log.LogReader;
 import org.riffle.log.ReadOptions;
 import org.riffle.log.Recording;
-import org.riffle.tui.InterimNoteDesk;
 import org.riffle.tui.ScreenOptions;
 import org.riffle.tui.TriageScreen;
+import org.riffle.tui.VisitDesk;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -29,16 +30,20 @@ final class OpenCommand implements Callable<Integer> {
     @Parameters(arity = "1..*", paramLabel = "LOG", description = "The log files to read.")
     private List<Path> logs;
 
+    @Mixin
+    private ReadOptionsMixin read;
+
     @Option(names = "--ascii", description = "Draw with ASCII only (default: when the locale is not UTF-8).")
     private boolean ascii;
 
     @Override
     public Integer call() throws LogException, IOException {
-        return open(logs, ascii, spec.commandLine().getErr());
+        return open(logs, read.toReadOptions(), ascii, spec.commandLine().getErr());
     }
 
     /** Opens the screen on {@code logs}; the shared body of {@code riffle open} and {@code riffle LOG}. */
-    static int open(List<Path> logs, boolean ascii, PrintWriter err) throws LogException, IOException {
+    static int open(List<Path> logs, ReadOptions readOptions, boolean ascii, PrintWriter err)
+            throws LogException, IOException {
         if (!TriageScreen.hasTerminal()) {
             err.println("riffle: no terminal: the screen needs one (over SSH use 'ssh -t'); without one use"
                     + " a headless command such as 'riffle channels LOG'");
@@ -46,11 +51,11 @@ final class OpenCommand implements Callable<Integer> {
         }
         List<Recording> recordings = new ArrayList<>();
         for (Path p : logs) {
-            recordings.add(LogReader.read(p, ReadOptions.defaults()));
+            recordings.add(LogReader.read(p, readOptions));
         }
         ScreenOptions options = ScreenOptions.fromEnvironment(System.getenv(), ascii);
-        try {
-            TriageScreen.Ending end = TriageScreen.open(recordings, options, new InterimNoteDesk(logs.get(0)));
+        try (VisitDesk desk = VisitDesk.forLogs(logs, options.ascii())) {
+            TriageScreen.Ending end = TriageScreen.open(recordings, options, desk);
             return end == TriageScreen.Ending.QUIT ? ExitCode.OK : ExitCode.INTERRUPTED;
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();

@@ -38,7 +38,7 @@ final class RiffleCommand implements Callable<Integer> {
     @Override
     public Integer call() throws LogException, IOException {
         if (logs != null && !logs.isEmpty()) {
-            return OpenCommand.open(logs, ascii, spec.commandLine().getErr());
+            return OpenCommand.open(logs, org.riffle.log.ReadOptions.defaults(), ascii, spec.commandLine().getErr());
         }
         spec.commandLine().usage(spec.commandLine().getOut());
         return ExitCode.USAGE;

@@ -66,6 +66,11 @@ final class Chrome {
                     + "   Esc: stay", c.cols(), Style.REVERSE);
             return;
         }
+        if (s.mode == ScreenState.Mode.ASK_DRAFT) {
+            c.field(0, row, "Comments from an earlier session of this log were kept. r: restore them   d: discard",
+                    c.cols(), Style.REVERSE);
+            return;
+        }
         if (!s.message.isEmpty()) {
             c.field(0, row, s.message, c.cols(), Style.BOLD);
             return;

@@ -3,19 +3,18 @@ package org.riffle.tui;
 import com.googlecode.lanterna.input.KeyStroke;
 import com.googlecode.lanterna.input.KeyType;
 import java.util.ArrayList;
-import java.util.HashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
 import java.util.concurrent.Executor;
 import java.util.function.Consumer;
-import org.riffle.log.Channel;
+import org.riffle.note.Findings;
+import org.riffle.triage.Assessment;
 import org.riffle.triage.TriageParams;
 
 /**
  * Applies events to the {@link ScreenState}: keys become {@link Action}s (or go to the prompt, the
- * quit question or the asset form), analysis events fill the sources, timer ticks save the draft.
- * Starts and cancels the analysis; hands note saving to a background executor.
+ * questions or the visit form), analysis events fill the sources. Starts and cancels the analysis;
+ * hands every change of the entries to the desk's draft and note saving to a background executor.
  *
  * <p>Confined to the UI thread.
  */
@@ -34,13 +33,10 @@ final class Controller {
     final Navigation nav;
     private Outcome outcome = Outcome.RUNNING;
     private boolean quitAfterSave;
-    private long draftedChanges;
-    private long lastDraftTick;
+    private boolean saveWhenDone;
+    private final Optional<Findings> earlier;
     /** Set when the next frame must be sent whole. */
     boolean fullRedraw;
-    /** What the shutdown hook saves when the process goes down with unsaved comments. */
-    volatile Findings draft;
-    volatile boolean draftPending;
 
     Controller(ScreenState s, ScreenOptions options, NoteDesk desk, Consumer<Event> post, Executor io) {
         this.s = s;
@@ -50,6 +46,10 @@ final class Controller {
         this.io = io;
         this.works = new AnalysisWork[s.sources.size()];
         this.nav = new Navigation(s);
+        this.earlier = desk.restorable().filter(f -> !f.isEmpty());
+        if (earlier.isPresent()) {
+            s.mode = ScreenState.Mode.ASK_DRAFT;
+        }
     }
 
     Outcome outcome() {
@@ -102,6 +102,10 @@ final class Controller {
             s.sources.get(d.source()).finished(d.assessment());
             if (s.sources.stream().noneMatch(Source::running)) {
                 s.message = "analysis finished";
+                if (saveWhenDone) {
+                    saveWhenDone = false;
+                    save(quitAfterSave);
+                }
             }
         } else if (e instanceof Event.Stopped st && current(st.source(), st.generation())) {
             Source src = s.sources.get(st.source());
@@ -111,6 +115,8 @@ final class Controller {
                 src.failed(st.reason());
             }
             s.message = st.reason();
+            saveWhenDone = false;
+            quitAfterSave = false;
         }
     }
 
@@ -120,18 +126,6 @@ final class Controller {
 
     private void tick() {
         s.ticks++;
-        if (s.remarks.changes() != draftedChanges && s.ticks - lastDraftTick >= 3) {
-            draftedChanges = s.remarks.changes();
-            lastDraftTick = s.ticks;
-            Findings f = findings();
-            io.execute(() -> {
-                try {
-                    desk.saveDraft(f);
-                } catch (Exception ex) {
-                    post.accept(new Event.Saved("", -1, "draft not saved: " + ex.getMessage()));
-                }
-            });
-        }
     }
 
     private void key(KeyStroke k) {
@@ -150,6 +144,10 @@ final class Controller {
         s.message = "";
         if (s.mode == ScreenState.Mode.ASK_QUIT) {
             askQuit(k);
+            return;
+        }
+        if (s.mode == ScreenState.Mode.ASK_DRAFT) {
+            askDraft(k);
             return;
         }
         if (s.mode == ScreenState.Mode.ASSET_FORM) {
@@ -200,7 +198,7 @@ final class Controller {
             case ASSET -> s.mode = ScreenState.Mode.ASSET_FORM;
             case COMMENT -> comment();
             case GENERAL_COMMENT -> s.prompt = new Prompt("general comment", s.remarks.general(),
-                    t -> s.remarks.general(t));
+                    s.remarks::general);
             case SAVE -> save(false);
             case CANCEL_WORK -> cancelWork();
             case HELP -> {
@@ -220,8 +218,8 @@ final class Controller {
             return;
         }
         ScreenState.Row r = s.row();
-        s.prompt = new Prompt("comment on " + s.label(r), s.remarks.comment(r.source(), r.channel()),
-                t -> s.remarks.comment(r.source(), r.channel(), t));
+        Findings.ChannelRef ref = s.ref(r);
+        s.prompt = new Prompt("comment on " + s.label(r), s.remarks.comment(ref), t -> s.remarks.comment(ref, t));
     }
 
     private void baseline() {
@@ -252,16 +250,14 @@ final class Controller {
     private void assetForm(KeyStroke k) {
         Optional<Action> a = KeyMap.map(k, View.LIST);
         if (k.getKeyType() == KeyType.Enter) {
-            int i = s.assetField;
-            s.prompt = new Prompt(AssetFacts.LABELS.get(i), s.remarks.asset().field(i),
-                    t -> s.remarks.asset(s.remarks.asset().with(i, t)));
+            AssetForm.Field f = AssetForm.FIELDS.get(s.assetField);
+            s.prompt = new Prompt(f.label(), f.get().apply(s.remarks), t -> f.set().accept(s.remarks, t));
         } else if (k.getKeyType() == KeyType.Escape || a.isPresent() && a.get() == Action.QUIT) {
             s.mode = ScreenState.Mode.NONE;
-            s.message = "asset facts kept for the note";
         } else if (a.isPresent() && a.get() == Action.UP) {
             s.assetField = Math.max(0, s.assetField - 1);
         } else if (a.isPresent() && a.get() == Action.DOWN) {
-            s.assetField = Math.min(AssetFacts.LABELS.size() - 1, s.assetField + 1);
+            s.assetField = Math.min(AssetForm.FIELDS.size() - 1, s.assetField + 1);
         }
     }
 
@@ -274,7 +270,18 @@ final class Controller {
                 any = true;
             }
         }
-        s.message = any ? "analysis stopped; figures so far are kept" : "no analysis running";
+        if (any) {
+            s.message = "analysis stopped; figures so far are kept (x again runs it anew)";
+            return;
+        }
+        for (int i = 0; i < works.length; i++) {
+            Source src = s.sources.get(i);
+            if (src.assessment().isEmpty() && !src.running()) {
+                restart(i, src.params());
+                any = true;
+            }
+        }
+        s.message = any ? "analysis started anew" : "no analysis running";
     }
 
     private void quit() {
@@ -290,33 +297,53 @@ final class Controller {
         if (k.getKeyType() == KeyType.Character && k.getCharacter() == 's') {
             save(true);
         } else if (k.getKeyType() == KeyType.Character && k.getCharacter() == 'd') {
-            draftPending = false;
             outcome = Outcome.QUIT;
         }
     }
 
-    private void interrupt() {
-        if (s.remarks.unsaved()) {
-            try {
-                desk.saveDraft(findings());
-                draftPending = false;
-            } catch (Exception ex) {
-                s.message = "draft not saved: " + ex.getMessage();
-            }
+    private void askDraft(KeyStroke k) {
+        if (k.getKeyType() == KeyType.Character && k.getCharacter() == 'r') {
+            s.remarks.entries(earlier.orElseThrow());
+            desk.draft(s.remarks.entries());
+            s.mode = ScreenState.Mode.NONE;
+            s.message = "earlier comments restored";
+        } else if (k.getKeyType() == KeyType.Character && k.getCharacter() == 'd'
+                || k.getKeyType() == KeyType.Escape) {
+            s.mode = ScreenState.Mode.NONE;
+            s.message = "earlier comments set aside (their draft stays until a note is saved)";
         }
+    }
+
+    private void interrupt() {
+        desk.draft(s.remarks.entries());
+        desk.saveDraftNow();
         outcome = Outcome.INTERRUPTED;
     }
 
     private void save(boolean thenQuit) {
         quitAfterSave = thenQuit;
-        Findings f = findings();
-        long changes = s.remarks.changes();
+        if (s.sources.stream().anyMatch(Source::running)) {
+            saveWhenDone = true;
+            s.message = "the note is saved as soon as the analysis finishes";
+            return;
+        }
+        List<Assessment> done = new ArrayList<>();
+        for (Source src : s.sources) {
+            if (src.assessment().isEmpty()) {
+                s.message = "no note: the analysis of " + src.recording.source().file()
+                        + " did not finish (x runs it anew)";
+                quitAfterSave = false;
+                return;
+            }
+            done.add(src.assessment().get());
+        }
+        Findings f = s.remarks.entries();
         s.message = "saving the note ...";
         io.execute(() -> {
             try {
-                post.accept(new Event.Saved(desk.saveNote(f).toString(), changes, ""));
+                post.accept(new Event.Saved(desk.saveNote(done, f).toString(), f, ""));
             } catch (Exception ex) {
-                post.accept(new Event.Saved("", -1, "note not saved: " + ex.getMessage()));
+                post.accept(new Event.Saved("", f, "note not saved: " + ex.getMessage()));
             }
         });
     }
@@ -327,10 +354,7 @@ final class Controller {
             quitAfterSave = false;
             return;
         }
-        if (sv.changes() == s.remarks.changes()) {
-            s.remarks.saved();
-            draftPending = false;
-        }
+        s.remarks.saved(sv.entries());
         s.message = "note saved: " + sv.path();
         if (quitAfterSave) {
             outcome = Outcome.QUIT;
@@ -338,28 +362,7 @@ final class Controller {
     }
 
     private void remarksChanged() {
-        if (s.remarks.unsaved()) {
-            draft = findings();
-            draftPending = true;
-        }
-    }
-
-    /** The findings as they stand: logs, assessments so far, comments by channel name. */
-    Findings findings() {
-        List<Findings.Part> parts = new ArrayList<>();
-        for (int i = 0; i < s.sources.size(); i++) {
-            Source src = s.sources.get(i);
-            Map<String, String> comments = new HashMap<>();
-            List<Channel> chs = src.recording.channels();
-            for (int c = 0; c < chs.size(); c++) {
-                String t = s.remarks.comment(i, c);
-                if (!t.isEmpty()) {
-                    comments.put(chs.get(c).name(), t);
-                }
-            }
-            parts.add(new Findings.Part(src.recording, src.assessment(), comments));
-        }
-        return new Findings(parts, s.remarks.general(), s.remarks.asset());
+        desk.draft(s.remarks.entries());
     }
 
     ScreenOptions options() {

@@ -39,9 +39,9 @@ sealed interface Event {
     }
 
     /**
-     * A note or draft save ended: where it went, the count of remark changes it holds, or why it
-     * failed ({@code ""} when it did not).
+     * A note save ended: where it went and the entries it holds, or why it failed ({@code ""} when it
+     * did not).
      */
-    record Saved(String path, long changes, String error) implements Event {
+    record Saved(String path, org.riffle.note.Findings entries, String error) implements Event {
     }
 }

@@ -69,7 +69,7 @@ final class Figures {
                 out.add(new Panel("not computed", x.notComputed()));
             }
         }
-        String comment = s.remarks.comment(s.row().source(), s.row().channel());
+        String comment = s.remarks.comment(s.ref(s.row()));
         out.add(new Panel("comment (c to edit)", List.of(comment.isEmpty() ? "-" : comment)));
         return out;
     }

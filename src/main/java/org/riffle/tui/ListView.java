@@ -75,7 +75,7 @@ final class ListView {
         for (int i = 0; i < s.sources.size(); i++) {
             b.append(i == 0 ? "" : "; ").append(s.sources.get(i).baseline().description());
         }
-        String asset = s.remarks.asset().asset();
+        String asset = s.remarks.entries().asset();
         b.append("   asset: ").append(asset.isEmpty() ? "- (a to set)" : asset);
         int done = 0;
         int all = 0;
@@ -109,7 +109,7 @@ final class ListView {
         Style base = sel ? Style.REVERSE : Style.PLAIN;
         int col = c.text(0, row, sel ? ">" : " ", base);
         col = c.text(col, row, level == null ? " " : level.mark(), styleOf(level, sel));
-        col = c.text(col, row, s.remarks.comment(r.source(), r.channel()).isEmpty() ? " " : "*", base);
+        col = c.text(col, row, s.remarks.comment(s.ref(r)).isEmpty() ? " " : "*", base);
         col = c.field(col, row, s.label(r), k.name(), base);
         col = c.text(col, row, " ", base);
         col = c.text(col, row, s.sparks.line(r, ch, k.spark(), !c.glyphs.ascii()), base);

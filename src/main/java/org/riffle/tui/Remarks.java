@@ -1,76 +1,60 @@
 package org.riffle.tui;
 
-import java.util.HashMap;
-import java.util.Map;
+import org.riffle.note.Findings;
+import org.riffle.note.Findings.ChannelRef;
 
 /**
- * What the technician has typed: a comment per channel, a general comment, the asset facts; and
- * whether any of it is not yet in a saved note.
+ * What the technician has entered: the note's {@link Findings} (site, asset, point, technician,
+ * conditions, a comment per channel, a general comment) and the {@link MachineFacts}; and whether any
+ * of it is not yet in a saved note.
  *
  * <p>Confined to the UI thread.
  */
 final class Remarks {
-    private final Map<String, String> comments = new HashMap<>();
-    private String general = "";
-    private AssetFacts asset = AssetFacts.none();
-    private boolean unsaved;
-    private long changes;
+    private Findings entries = Findings.EMPTY;
+    private MachineFacts machine = MachineFacts.none();
+    private Findings savedEntries = Findings.EMPTY;
 
-    /** Key of channel {@code channel} of source {@code source}. */
-    static String key(int source, int channel) {
-        return source + ":" + channel;
+    Findings entries() {
+        return entries;
     }
 
-    String comment(int source, int channel) {
-        return comments.getOrDefault(key(source, channel), "");
+    /** Replaces the entries (typing, or a restored draft). */
+    void entries(Findings f) {
+        entries = f;
     }
 
-    void comment(int source, int channel, String text) {
-        String old = comment(source, channel);
-        if (text.isEmpty()) {
-            comments.remove(key(source, channel));
-        } else {
-            comments.put(key(source, channel), text);
-        }
-        changed(!old.equals(text));
+    String comment(ChannelRef ref) {
+        return entries.comment(ref);
+    }
+
+    void comment(ChannelRef ref, String text) {
+        entries = entries.withComment(ref, text);
     }
 
     String general() {
-        return general;
+        return entries.general();
     }
 
     void general(String text) {
-        changed(!general.equals(text));
-        general = text;
+        entries = entries.withGeneral(text);
     }
 
-    AssetFacts asset() {
-        return asset;
+    MachineFacts machine() {
+        return machine;
     }
 
-    void asset(AssetFacts a) {
-        changed(!asset.equals(a));
-        asset = a;
-    }
-
-    private void changed(boolean really) {
-        if (really) {
-            unsaved = true;
-            changes++;
-        }
+    void machine(MachineFacts m) {
+        machine = m;
     }
 
     /** True when something typed is not in a saved note yet. */
     boolean unsaved() {
-        return unsaved;
+        return !entries.equals(savedEntries);
     }
 
-    /** Counts every change; the draft autosave compares it with the count it last wrote. */
-    long changes() {
-        return changes;
-    }
-
-    void saved() {
-        unsaved = false;
+    /** The note holding {@code f} was saved. */
+    void saved(Findings f) {
+        savedEntries = f;
     }
 }

@@ -3,6 +3,7 @@ package org.riffle.tui;
 import java.util.ArrayList;
 import java.util.List;
 import org.riffle.log.Channel;
+import org.riffle.note.Findings.ChannelRef;
 
 /**
  * Everything the painters read: the logs and what is known of them, the technician's remarks, and
@@ -13,7 +14,7 @@ import org.riffle.log.Channel;
 final class ScreenState {
     /** A modal question or form in front of the view. */
     enum Mode {
-        NONE, ASK_QUIT, ASSET_FORM
+        NONE, ASK_QUIT, ASK_DRAFT, ASSET_FORM
     }
 
     /** One channel row: which log, which channel. */
@@ -74,6 +75,12 @@ final class ScreenState {
         to = Math.max(1, n);
         cursor = Math.max(0, n / 2);
         baselineAnchor = -1;
+    }
+
+    /** The note's name for a row's channel: the log file as the recording names it, and the channel. */
+    ChannelRef ref(Row r) {
+        Source src = sources.get(r.source());
+        return new ChannelRef(src.recording.source().file(), src.recording.channels().get(r.channel()).name());
     }
 
     /** Name shown for a row: the channel name, prefixed by the log's number when there are several logs. */

@@ -15,7 +15,8 @@ import org.riffle.log.Recording;
  * The terminal screen: opens Lanterna's text terminal on standard input and output (never a Swing
  * window, whatever {@code DISPLAY} says), runs the screen until the technician quits, and always
  * restores the terminal: on quit, on Ctrl-C (read as a key, handled here), and on SIGTERM or hang-up
- * (Lanterna's own shutdown hook restores the terminal settings; ours saves the comment draft).
+ * (Lanterna's own shutdown hook restores the terminal settings; the desk's draft autosave keeps the
+ * comments).
  *
  * <p>The screen's thread is the caller's. One more thread reads keys (Lanterna's input side only) and
  * posts them to the screen's queue; analysis and note saving run on their own threads and post too.
@@ -51,17 +52,6 @@ public final class TriageScreen {
         UnixTerminal terminal = new UnixTerminal(System.in, System.out, cs, CtrlCBehaviour.TRAP);
         TerminalScreen screen = new TerminalScreen(terminal);
         ScreenLoop loop = new ScreenLoop(screen, recordings, options, desk);
-        Controller ctl = loop.controller;
-        Thread hook = new Thread(() -> {
-            if (ctl.draftPending && ctl.draft != null) {
-                try {
-                    desk.saveDraft(ctl.draft);
-                } catch (Exception ignored) {
-                    // going down: nowhere left to report it
-                }
-            }
-        }, "riffle-draft-on-exit");
-        Runtime.getRuntime().addShutdownHook(hook);
         try {
             screen.startScreen();
             terminal.addResizeListener((t, size) -> loop.post(new Event.Resized()));
@@ -74,11 +64,6 @@ public final class TriageScreen {
                 screen.stopScreen();
             } finally {
                 terminal.close();
-                try {
-                    Runtime.getRuntime().removeShutdownHook(hook);
-                } catch (IllegalStateException goingDown) {
-                    // the hook runs anyway
-                }
             }
         }
     }

@@ -8,9 +8,11 @@ import com.googlecode.lanterna.input.KeyStroke;
 import com.googlecode.lanterna.input.KeyType;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Optional;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.riffle.note.Findings;
 
 /** The screen on Lanterna's virtual terminal: what is shown, and what keys do. */
 class TriageScreenTest {
@@ -151,7 +153,7 @@ class TriageScreenTest {
         assertEquals(Controller.Outcome.RUNNING, v.loop.controller.outcome());
         v.type("s").settle(300);
         assertTrue(v.line(23).startsWith("note saved: /tmp/findings-1.txt"), v.line(23));
-        assertEquals("runs hot", v.desk.notes.get(0).parts().get(0).comments().get("bearing_temp"));
+        assertEquals("runs hot", v.desk.notes.get(0).comment(log.toString(), "bearing_temp"));
         v.type("q");
         assertEquals(Controller.Outcome.QUIT, v.loop.controller.outcome());
     }
@@ -161,15 +163,37 @@ class TriageScreenTest {
         VirtualScreen v = open(80, 24).type("C").type("pump B offline").press(KeyType.Enter);
         v.press(new KeyStroke('c', true, false));
         assertEquals(Controller.Outcome.INTERRUPTED, v.loop.controller.outcome());
-        assertEquals("pump B offline", v.desk.drafts.get(0).generalComment());
+        assertEquals("pump B offline", v.desk.drafts.get(0).general());
     }
 
     @Test
-    void assetFormKeepsWhatIsTyped() throws Exception {
-        VirtualScreen v = open(80, 24).type("a").press(KeyType.Enter).type("P-101").press(KeyType.Enter)
-                .type("jj").press(KeyType.Enter).type("rigid").press(KeyType.Enter).press(KeyType.Escape);
+    void visitFormKeepsWhatIsTyped() throws Exception {
+        VirtualScreen v = open(80, 24).type("aj").press(KeyType.Enter).type("P-101").press(KeyType.Enter)
+                .type("jjjjj").press(KeyType.Enter).type("rigid").press(KeyType.Enter).press(KeyType.Escape);
         assertTrue(v.line(3).contains("asset: P-101"), v.line(3));
-        assertEquals("rigid", v.loop.controller.findings().asset().support());
+        assertEquals("rigid", v.loop.controller.s.remarks.machine().support());
+        assertEquals("P-101", v.desk.latest.asset(), "the draft follows every change");
+    }
+
+    @Test
+    void aDraftOfAnEarlierSessionIsOfferedAndRestored() throws Exception {
+        Findings earlier = Findings.EMPTY.withGeneral("left from before").withComment(log.toString(), "flow", "noisy");
+        VirtualScreen v = new VirtualScreen(List.of(log), 80, 24, false, Optional.of(earlier));
+        assertTrue(v.line(23).startsWith("Comments from an earlier session of this log were kept."), v.line(23));
+        v.type("r");
+        assertEquals(earlier, v.loop.controller.s.remarks.entries());
+        assertTrue(v.line(rowOf(v, "flow")).startsWith("  *"), v.text());
+    }
+
+    @Test
+    void savingWhileTheAnalysisRunsWaitsForIt() throws Exception {
+        VirtualScreen v = open(80, 24).type("C").type("check coupling").press(KeyType.Enter);
+        v.loop.controller.startAll();
+        v.type("s");
+        assertTrue(v.desk.notes.isEmpty() || v.line(23).startsWith("note saved"), v.line(23));
+        v.analysed().settle(300);
+        assertEquals(1, v.desk.notes.size(), v.text());
+        assertEquals("check coupling", v.desk.notes.get(0).general());
     }
 
     @Test

@@ -9,11 +9,14 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.concurrent.TimeUnit;
 import org.riffle.log.LogException;
 import org.riffle.log.LogReader;
 import org.riffle.log.ReadOptions;
 import org.riffle.log.Recording;
+import org.riffle.note.Findings;
+import org.riffle.triage.Assessment;
 
 /**
  * The screen on Lanterna's virtual terminal, driven from the test thread (which plays the UI thread):
@@ -26,6 +29,13 @@ final class VirtualScreen {
     final RecordingDesk desk = new RecordingDesk();
 
     VirtualScreen(List<Path> logs, int cols, int rows, boolean ascii) throws IOException, LogException {
+        this(logs, cols, rows, ascii, Optional.empty());
+    }
+
+    /** As above, with a draft of an earlier session on offer. */
+    VirtualScreen(List<Path> logs, int cols, int rows, boolean ascii, Optional<Findings> earlier)
+            throws IOException, LogException {
+        desk.earlier = earlier;
         terminal = new DefaultVirtualTerminal(new TerminalSize(cols, rows));
         screen = new TerminalScreen(terminal);
         screen.startScreen();
@@ -109,16 +119,33 @@ final class VirtualScreen {
     static final class RecordingDesk implements NoteDesk {
         final List<Findings> notes = new ArrayList<>();
         final List<Findings> drafts = new ArrayList<>();
+        Findings latest = Findings.EMPTY;
+        Optional<Findings> earlier = Optional.empty();
 
         @Override
-        public synchronized Path saveNote(Findings f) {
+        public synchronized Path saveNote(List<Assessment> assessments, Findings f) {
             notes.add(f);
             return Path.of("/tmp/findings-" + notes.size() + ".txt");
         }
 
         @Override
-        public synchronized void saveDraft(Findings f) {
-            drafts.add(f);
+        public synchronized void draft(Findings f) {
+            latest = f;
+        }
+
+        @Override
+        public synchronized Optional<String> saveDraftNow() {
+            drafts.add(latest);
+            return Optional.empty();
+        }
+
+        @Override
+        public Optional<Findings> restorable() {
+            return earlier;
+        }
+
+        @Override
+        public void close() {
         }
     }
 }
