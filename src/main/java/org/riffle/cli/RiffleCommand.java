@@ -24,6 +24,8 @@ import picocli.CommandLine.Spec;
             ChannelsCommand.class,
             OpenCommand.class,
             DemoCommand.class,
+            RqaCommand.class,
+            TrendCommand.class,
         })
 final class RiffleCommand implements Callable<Integer> {
     @Spec
