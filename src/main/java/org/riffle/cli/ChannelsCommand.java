@@ -8,10 +8,10 @@ import java.util.Map;
 import java.util.concurrent.Callable;
 import org.riffle.log.LogException;
 import org.riffle.log.LogReader;
-import org.riffle.log.ReadOptions;
 import org.riffle.log.Recording;
 import org.riffle.log.TextChannel;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -38,6 +38,9 @@ final class ChannelsCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "LOG", description = "The log file to read ('-' for standard input).")
     private Path log;
 
+    @Mixin
+    private ReadOptionsMixin read;
+
     @Option(names = "--csv", description = "Write the table as CSV to standard output (no sparkline).")
     private boolean csv;
 
@@ -58,7 +61,7 @@ final class ChannelsCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws LogException {
-        Recording rec = LogReader.read(log, ReadOptions.defaults());
+        Recording rec = LogReader.read(log, read.toReadOptions());
         PrintWriter out = spec.commandLine().getOut();
         List<ChannelTable.Row> rows = ChannelTable.rows(rec, SPARK_WIDTH, !ascii && utf8(env));
         if (csv) {
