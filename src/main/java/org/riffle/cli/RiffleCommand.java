@@ -16,6 +16,7 @@ import picocli.CommandLine.Spec;
         },
         subcommands = {
             ChannelsCommand.class,
+            SpectrumCommand.class,
             DemoCommand.class,
         })
 final class RiffleCommand implements Callable<Integer> {

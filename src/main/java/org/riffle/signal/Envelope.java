@@ -59,7 +59,7 @@ public final class Envelope {
             }
         }
         return new Band(bestK * sampleRateHz / 16, (bestK + 2) * sampleRateHz / 16,
-                String.format(Locale.ROOT, "highest spectral kurtosis (%.3g) of 5 bands fs/16 wide x2", best));
+                String.format(Locale.ROOT, "highest spectral kurtosis (%.3g) of 5 bands fs/8 wide", best));
     }
 
     /**

@@ -72,6 +72,31 @@ public final class Vibration {
         return new VibrationReport(unit, s, peaks, severity, shaft, lines, envBand, env, p, notes);
     }
 
+    /**
+     * The overall severity of a whole channel without the rest of the analysis (for tables): the shaft
+     * speed given or estimated, the RMS velocity in the standard's band and its zone. Never fails: a
+     * channel that is not a vibration channel, too short, or does not fit the settings gets a
+     * {@link Severity} without a value and with the reason.
+     */
+    public static Severity overall(double[] x, double sampleRateHz, Unit unit, VibrationParams p) {
+        if (unit.quantity() != Unit.Quantity.VELOCITY && unit.quantity() != Unit.Quantity.ACCELERATION) {
+            return new Severity(Double.NaN, null, p.table(), Optional.empty(), "severity needs a velocity or "
+                    + "acceleration unit, not '" + unit.text() + "'");
+        }
+        if (x.length < MIN_SAMPLES) {
+            return new Severity(Double.NaN, null, p.table(), Optional.empty(), x.length + " samples are too few "
+                    + "for a spectrum (at least " + MIN_SAMPLES + ")");
+        }
+        try {
+            Spectrum s = Welch.estimate(x, sampleRateHz, p.welch());
+            Optional<ShaftSpeed> shaft = p.rpm().isPresent() ? Optional.of(ShaftSpeed.given(p.rpm().getAsDouble()))
+                    : ShaftSpeed.estimate(Severity.velocityMmS(s, unit).orElse(s));
+            return Severity.of(s, unit, shaft, p.table());
+        } catch (IllegalArgumentException e) {
+            return new Severity(Double.NaN, null, p.table(), Optional.empty(), e.getMessage());
+        }
+    }
+
     /** The RMS velocity in the standard's band of {@code x[from, to)}, for a baseline (see {@link Severity}). */
     public static Severity severity(double[] x, int from, int to, double sampleRateHz, Unit unit,
                                     Optional<ShaftSpeed> shaft, VibrationParams p) {
