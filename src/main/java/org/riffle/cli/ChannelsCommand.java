@@ -71,8 +71,9 @@ final class ChannelsCommand implements Callable<Integer> {
         if (csv) {
             ChannelTable.printCsv(rows, out);
         } else {
-            out.println(rec.source().file() + ": " + rec.rows() + " rows, " + rec.channels().size()
-                    + " numeric channels, " + rec.textChannels().size() + " text channels");
+            out.println(rec.source().file() + ": " + rec.rows() + " rows, "
+                    + count(rec.channels().size(), "numeric channel") + ", "
+                    + count(rec.textChannels().size(), "text channel"));
             ChannelTable.printText(rows, out);
             for (TextChannel t : rec.textChannels()) {
                 out.println("text channel " + t.name() + " (not analysed): " + String.join(", ", t.distinct()));
@@ -81,6 +82,10 @@ final class ChannelsCommand implements Callable<Integer> {
         }
         out.flush();
         return ExitCode.OK;
+    }
+
+    private static String count(int n, String noun) {
+        return n + " " + noun + (n == 1 ? "" : "s");
     }
 
     /**
