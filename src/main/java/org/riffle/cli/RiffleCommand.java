@@ -16,6 +16,7 @@ import picocli.CommandLine.Spec;
         },
         subcommands = {
             ChannelsCommand.class,
+            ReportCommand.class,
             DemoCommand.class,
         })
 final class RiffleCommand implements Callable<Integer> {
