@@ -8,10 +8,10 @@ import java.util.Map;
 import java.util.concurrent.Callable;
 import org.riffle.log.LogException;
 import org.riffle.log.LogReader;
-import org.riffle.log.ReadOptions;
 import org.riffle.log.Recording;
 import org.riffle.log.TextChannel;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -38,6 +38,9 @@ final class ChannelsCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "LOG", description = "The log file to read ('-' for standard input).")
     private Path log;
 
+    @Mixin
+    private ReadOptionsMixin read;
+
     @Option(names = "--csv", description = "Write the table as CSV to standard output (no sparkline).")
     private boolean csv;
 
@@ -58,14 +61,15 @@ final class ChannelsCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws LogException {
-        Recording rec = LogReader.read(log, ReadOptions.defaults());
+        Recording rec = LogReader.read(log, read.toReadOptions());
         PrintWriter out = spec.commandLine().getOut();
         List<ChannelTable.Row> rows = ChannelTable.rows(rec, SPARK_WIDTH, !ascii && utf8(env));
         if (csv) {
             ChannelTable.printCsv(rows, out);
         } else {
-            out.println(rec.source().file() + ": " + rec.rows() + " rows, " + rec.channels().size()
-                    + " numeric channels, " + rec.textChannels().size() + " text channels");
+            out.println(rec.source().file() + ": " + rec.rows() + " rows, "
+                    + count(rec.channels().size(), "numeric channel") + ", "
+                    + count(rec.textChannels().size(), "text channel"));
             ChannelTable.printText(rows, out);
             for (TextChannel t : rec.textChannels()) {
                 out.println("text channel " + t.name() + " (not analysed): " + String.join(", ", t.distinct()));
@@ -74,6 +78,10 @@ final class ChannelsCommand implements Callable<Integer> {
         }
         out.flush();
         return ExitCode.OK;
+    }
+
+    private static String count(int n, String noun) {
+        return n + " " + noun + (n == 1 ? "" : "s");
     }
 
     /**

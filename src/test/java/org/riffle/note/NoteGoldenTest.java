@@ -28,8 +28,8 @@ class NoteGoldenTest {
         return Findings.EMPTY.withSite("Hollow Creek pumping station (invented)").withAsset("P-3")
                 .withPoint("pump outboard bearing, horizontal")
                 .withConditions("1480 r/min, discharge valve 70 % open\nsecond pump on standby")
-                .withComment(file, "discharge [bar]", "Sags in the last third; valve position unchanged.")
-                .withComment(file, "bearing temp [\u00b0C]", "Housing warm to the touch.\n\nCheck grease.")
+                .withComment(file, "discharge", "Sags in the last third; valve position unchanged.")
+                .withComment(file, "bearing temp", "Housing warm to the touch.\n\nCheck grease.")
                 .withGeneral("Escalated to the site analyst. Re-check at the next visit.");
     }
 
