@@ -24,6 +24,7 @@ import picocli.CommandLine.Spec;
             ChannelsCommand.class,
             SpectrumCommand.class,
             OpenCommand.class,
+            ReportCommand.class,
             DemoCommand.class,
         })
 final class RiffleCommand implements Callable<Integer> {
