@@ -22,7 +22,9 @@ import picocli.CommandLine.Spec;
         },
         subcommands = {
             ChannelsCommand.class,
+            SpectrumCommand.class,
             OpenCommand.class,
+            ReportCommand.class,
             DemoCommand.class,
             RqaCommand.class,
             TrendCommand.class,
