@@ -22,6 +22,7 @@ import picocli.CommandLine.Spec;
         },
         subcommands = {
             ChannelsCommand.class,
+            SpectrumCommand.class,
             OpenCommand.class,
             ReportCommand.class,
             DemoCommand.class,
