@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.regex.Pattern;
 
 /**
  * Works out the layout of a delimited log from its first lines (at most {@link #MAX_LINES}): the
@@ -144,7 +145,41 @@ final class Sniffer {
                 bestFit = fit;
             }
         }
+        if (bestFit == 0 || (best == ',' && singleDecimalCommaColumn(head, content))) {
+            return decimalCommaSeen(head, content) ? ';' : ',';
+        }
         return best;
+    }
+
+    private static final Pattern DECIMAL_COMMA = Pattern.compile(".*\\d,\\d.*");
+    private static final Pattern INTEGER = Pattern.compile("\\s*\"?[+-]?\\d+");
+    private static final Pattern FRACTION = Pattern.compile("\\d+([eE][+-]?\\d+)?\"?\\s*");
+
+    private static boolean decimalCommaSeen(List<String> head, List<Integer> content) {
+        for (int i : content) {
+            if (DECIMAL_COMMA.matcher(head.get(i)).matches()) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /**
+     * True for one column of numbers with a decimal comma and no quotes, which the comma splits in two:
+     * every line has at most one comma, and where it has one, an integer stands before it and only
+     * fraction digits after it, and some line has one.
+     */
+    private static boolean singleDecimalCommaColumn(List<String> head, List<Integer> content) {
+        int split = 0;
+        for (int i : content) {
+            List<String> f = Splitter.naive(head.get(i), ',');
+            if (f.size() > 2 || (f.size() == 2 && !(INTEGER.matcher(f.get(0)).matches()
+                    && FRACTION.matcher(f.get(1)).matches()))) {
+                return false;
+            }
+            split += f.size() == 2 ? 1 : 0;
+        }
+        return split > 0;
     }
 
     /**
@@ -197,6 +232,16 @@ final class Sniffer {
         if (run == split.size()) {
             return split.size() - 1;
         }
+        if (run >= 2 && split.get(run - 1).size() == 1 && isBareUnit(split.get(run - 1).get(0))
+                && !ColumnSniffer.valueLike(split.get(run - 2).get(0))) {
+            return run - 2;
+        }
         return run > 0 ? run - 1 : 0;
+    }
+
+    /** A units-row cell of a single column: a unit without spaces, or anything in brackets. */
+    private static boolean isBareUnit(String cell) {
+        String c = cell.strip();
+        return (c.startsWith("[") && c.endsWith("]")) || (!c.contains(" ") && Units.looksLikeUnit(Units.strip(c)));
     }
 }
