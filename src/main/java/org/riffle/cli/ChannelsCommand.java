@@ -41,6 +41,9 @@ final class ChannelsCommand implements Callable<Integer> {
     @Mixin
     private ReadOptionsMixin read;
 
+    @Mixin
+    private VibrationOptions vibration;
+
     @Option(names = "--csv", description = "Write the table as CSV to standard output (no sparkline).")
     private boolean csv;
 
@@ -63,12 +66,14 @@ final class ChannelsCommand implements Callable<Integer> {
     public Integer call() throws LogException {
         Recording rec = LogReader.read(log, read.toReadOptions());
         PrintWriter out = spec.commandLine().getOut();
-        List<ChannelTable.Row> rows = ChannelTable.rows(rec, SPARK_WIDTH, !ascii && utf8(env));
+        List<ChannelTable.Row> rows = ChannelTable.rows(rec, SPARK_WIDTH, !ascii && utf8(env),
+                vibration.params());
         if (csv) {
             ChannelTable.printCsv(rows, out);
         } else {
-            out.println(rec.source().file() + ": " + rec.rows() + " rows, " + rec.channels().size()
-                    + " numeric channels, " + rec.textChannels().size() + " text channels");
+            out.println(rec.source().file() + ": " + rec.rows() + " rows, "
+                    + count(rec.channels().size(), "numeric channel") + ", "
+                    + count(rec.textChannels().size(), "text channel"));
             ChannelTable.printText(rows, out);
             for (TextChannel t : rec.textChannels()) {
                 out.println("text channel " + t.name() + " (not analysed): " + String.join(", ", t.distinct()));
@@ -77,6 +82,10 @@ final class ChannelsCommand implements Callable<Integer> {
         }
         out.flush();
         return ExitCode.OK;
+    }
+
+    private static String count(int n, String noun) {
+        return n + " " + noun + (n == 1 ? "" : "s");
     }
 
     /**

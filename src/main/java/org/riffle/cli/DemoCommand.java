@@ -2,6 +2,8 @@ package org.riffle.cli;
 
 import java.io.IOException;
 import java.io.PrintWriter;
+import java.nio.file.AccessDeniedException;
+import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import org.riffle.demo.Demo;
@@ -30,8 +32,18 @@ final class DemoCommand implements Callable<Integer> {
             }
             return ExitCode.OK;
         } catch (IOException e) {
-            spec.commandLine().getErr().println("riffle: " + dir + ": cannot write the demo fixtures: " + e);
+            spec.commandLine().getErr().println("riffle: " + dir + ": cannot write the demo fixtures: " + reason(e));
             return ExitCode.FAILED;
         }
+    }
+
+    private static String reason(IOException e) {
+        if (e instanceof FileAlreadyExistsException) {
+            return "a file is in the way of " + e.getMessage();
+        }
+        if (e instanceof AccessDeniedException) {
+            return "permission denied on " + e.getMessage();
+        }
+        return e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
     }
 }

@@ -31,7 +31,8 @@ final class DemoReadme {
                 with offset, eight numeric channels and a `status` text column (RUN, STOP).
                 - A few `NaN` (motor current) and `---` (gearbox oil temperature) tokens.
                 - A logger restart leaves a gap of %d rows (17 min); afterwards the logger's clock grid is %d s later.
-                - The last %d rows: the fan coasts down to STOP for the inspection.
+                - The last %d rows: the fan is isolated for the inspection: status STOP, and every instrument
+                  loop, powered from the isolated panel, reads `---`.
                 - From 60 %% of the log (row %d of the full grid) a gearbox input-shaft bearing defect develops:
                   the overall gearbox vibration and the DE bearing temperature creep up; the supply-pressure
                   ripple turns from irregular to a regular oscillation (period 84 s) over 3 h while keeping its

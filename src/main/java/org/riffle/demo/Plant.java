@@ -59,9 +59,8 @@ final class Plant {
      *
      * @param fault defect severity 0..1 (0 = healthy)
      * @param periodic share 0..1 of the pressure ripple's variance that is periodic
-     * @param coast speed factor 0..1 (1 running, falling towards 0 while the fan coasts down)
      */
-    void step(double t, double fault, double periodic, double coast) {
+    void step(double t, double fault, double periodic) {
         double hours = t / 3600;
         trafficWalk = 0.985 * trafficWalk + StrictMath.sqrt(1 - 0.985 * 0.985) * 0.05 * trafficNoise.nextGaussian();
         double traffic = Math.max(0, traffic(hours % 24) + trafficWalk);
@@ -77,16 +76,15 @@ final class Plant {
         double q = 28 + 26 * traffic;
         double p = PRESSURE_SET_PA + 4 * (traffic - 0.45) + rip;
         double shaftKw = p * q / 1000 / 0.78 / 0.97;
-        flow = coast * q + 0.35 * meter.nextGaussian();
-        pressure = coast * coast * p;
-        double loadKw = coast < 1 ? 0 : shaftKw;
-        double loadAmps = loadKw * 1000 / (StrictMath.sqrt(3) * 400 * 0.94);
-        current = coast < 1 ? 0 : StrictMath.sqrt(48 * 48 + loadAmps * loadAmps) + 0.5 * meter.nextGaussian();
-        motorRpm = coast * Af2.motorRpm(shaftKw) + 0.3 * meter.nextGaussian();
+        flow = q + 0.35 * meter.nextGaussian();
+        pressure = p;
+        double loadAmps = shaftKw * 1000 / (StrictMath.sqrt(3) * 400 * 0.94);
+        current = StrictMath.sqrt(48 * 48 + loadAmps * loadAmps) + 0.5 * meter.nextGaussian();
+        motorRpm = Af2.motorRpm(shaftKw) + 0.3 * meter.nextGaussian();
 
-        double windingTarget = ambient + 8 * coast + 62 * (current / 160) * (current / 160);
-        double oilTarget = ambient + 22 * coast + 0.5 * loadKw;
-        double bearingTarget = oilTarget + 5 + 0.06 * loadKw + 8 * fault;
+        double windingTarget = ambient + 8 + 62 * (current / 160) * (current / 160);
+        double oilTarget = ambient + 22 + 0.5 * shaftKw;
+        double bearingTarget = oilTarget + 5 + 0.06 * shaftKw + 8 * fault;
         if (!started) {
             winding = windingTarget;
             oil = oilTarget;
@@ -96,8 +94,7 @@ final class Plant {
         winding += (windingTarget - winding) * lag(40 * 60);
         oil += (oilTarget - oil) * lag(80 * 60);
         bearing += (bearingTarget - bearing) * lag(25 * 60);
-        double vib = (1.0 + 0.006 * shaftKw + 2.3 * StrictMath.pow(fault, 1.2)) * (1 + 0.035 * meter.nextGaussian());
-        vibration = coast < 1 ? 0.05 + vib * coast * coast : vib;
+        vibration = (1.0 + 0.006 * shaftKw + 2.3 * StrictMath.pow(fault, 1.2)) * (1 + 0.035 * meter.nextGaussian());
     }
 
     /** Share of the approach to a first-order target in one step of a lag with time constant {@code tauS}. */

@@ -11,8 +11,9 @@ import java.util.Set;
  * line ends, UTF-8 without byte-order mark. A preamble, a header with units as {@code name [unit]},
  * ISO 8601 timestamps with offset, eight numeric channels and a RUN/STOP status column. Realistic
  * touches: a few {@code NaN} and {@code ---} tokens, a logger restart that leaves a gap and shifts the
- * logger's clock grid by 4 s, and a coast-down to STOP in the last two minutes (the fan stopped for the
- * inspection). From 60 % of the log a gearbox bearing defect grows. Stateless.
+ * logger's clock grid by 4 s, and in the last two minutes the fan isolated for the inspection: status
+ * STOP, and every instrument loop, powered from the isolated panel, reads {@code ---}. From 60 % of the
+ * log a gearbox bearing defect grows. Stateless.
  */
 final class ProcessLog {
     static final String FILE = "af2-process.csv";
@@ -28,7 +29,7 @@ final class ProcessLog {
     static final int FAULT_ROW = GRID_ROWS * 6 / 10;
     /** Rows over which the pressure ripple turns periodic (3 h). */
     static final int RIPPLE_TURN_ROWS = 1_080;
-    /** Last rows: coast-down to STOP. */
+    /** Last rows: fan isolated (STOP), instrument loops unpowered. */
     static final int STOP_ROWS = 12;
     static final String HEADER = "time,supply pressure [Pa],air flow [m3/s],motor current [A],"
             + "motor winding temp [°C],gearbox oil temp [°C],gearbox DE bearing temp [°C],fan speed [rpm],"
@@ -53,14 +54,16 @@ final class ProcessLog {
         Random meter = new Random(SEED + 11);
         Plant plant = new Plant(SEED);
         for (int i = 0; i < GRID_ROWS; i++) {
-            int stopIndex = i - (GRID_ROWS - STOP_ROWS);
-            double coast = stopIndex < 0 ? 1 : StrictMath.exp(-(stopIndex + 1) * Plant.STEP_S / 35);
-            plant.step(i * Plant.STEP_S, fault(i), periodicShare(i), coast);
+            plant.step(i * Plant.STEP_S, fault(i), periodicShare(i));
             if (i >= GAP_FROM && i < GAP_FROM + GAP_ROWS) {
                 continue; // the logger was restarting: the plant ran on, nothing was written
             }
             long shift = i >= GAP_FROM + GAP_ROWS ? RESTART_SHIFT_S : 0;
             sb.append(ISO.format(Af2.LOG_START.plusSeconds(i * 10L + shift)));
+            if (i >= GRID_ROWS - STOP_ROWS) {
+                line(sb, ",---".repeat(8) + ",STOP");
+                continue;
+            }
             value(sb, plant.pressure, 1);
             value(sb, plant.flow, 2);
             if (nanCurrent.contains(i)) {
@@ -77,7 +80,7 @@ final class ProcessLog {
             value(sb, plant.bearing() + 0.08 * meter.nextGaussian(), 1);
             value(sb, Af2.fanRpm(plant.motorRpm), 1);
             value(sb, plant.vibration, 2);
-            line(sb, coast < 1 ? ",STOP" : ",RUN");
+            line(sb, ",RUN");
         }
         return sb.toString().getBytes(StandardCharsets.UTF_8);
     }

@@ -10,6 +10,7 @@ import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
@@ -47,16 +48,51 @@ class ChannelsCommandTest {
      */
     @Test
     void csvAgreesWithScipy() throws IOException {
-        MainTest.Run r = MainTest.run("channels", "--csv", SMALL);
+        List<Map<String, String>> rows = csvAgreesWith(SMALL, "channels-small-scipy.csv");
+        for (Map<String, String> got : rows) {
+            assertEquals("1", got.get("rate_hz"));
+            assertEquals("39", got.get("span_s"));
+            assertEquals("0", got.get("gaps"));
+        }
+    }
+
+    /**
+     * The demo process log through the real reader and {@code --csv}, against NumPy 2.4.6 / SciPy
+     * 1.17.1 ({@code channels_demo.py}): the {@code NaN} and {@code ---} tokens count as missing, the
+     * status column is left out, the logger restart is one gap. Tolerance as above.
+     */
+    @Test
+    void demoProcessLogAgreesWithNumpy() throws IOException {
+        List<Map<String, String>> rows = csvAgreesWith("fixtures/demo/af2-process.csv", "af2-process-numpy.csv");
+        assertEquals(8, rows.size());
+        assertEquals("\u00b0C", rows.get(3).get("unit"));
+        for (Map<String, String> got : rows) {
+            assertEquals("0.1", got.get("rate_hz"));
+            assertEquals("172794", got.get("span_s"), "2026-02-16T00:00:00 to 2026-02-17T23:59:54");
+            assertEquals("1", got.get("gaps"), "the logger restart");
+        }
+    }
+
+    @Test
+    void demoTableMatchesTheGoldenText() {
+        MainTest.Run r = MainTest.run("channels", "--ascii", "fixtures/demo/af2-process.csv");
+        assertEquals(0, r.status(), r.err());
+        Golden.assertMatches("af2-process.channels.expected.txt", r.out());
+    }
+
+    /** Runs {@code channels --csv log} and compares each row's statistics with the reference file. */
+    private static List<Map<String, String>> csvAgreesWith(String log, String reference) throws IOException {
+        MainTest.Run r = MainTest.run("channels", "--csv", log);
         assertEquals(0, r.status(), r.err());
         List<String> lines = r.out().lines().toList();
         String[] head = lines.get(0).split(",", -1);
         assertTrue(lines.get(0).startsWith("channel,unit,samples,missing,rate_hz,mean,std,min,max,rms,crest,kurtosis"),
                 lines.get(0));
-        List<String> ref = Files.readAllLines(Path.of("src/test/resources/org/riffle/cli/channels-small-scipy.csv"),
+        List<String> ref = Files.readAllLines(Path.of("src/test/resources/org/riffle/cli", reference),
                 StandardCharsets.UTF_8);
         String[] refHead = ref.get(1).split(",");
         assertEquals(ref.size() - 2, lines.size() - 1, "one row per channel");
+        List<Map<String, String>> rows = new ArrayList<>();
         for (int row = 0; row < lines.size() - 1; row++) {
             Map<String, String> got = fields(head, lines.get(row + 1).split(",", -1));
             Map<String, String> want = fields(refHead, ref.get(row + 2).split(","));
@@ -67,11 +103,11 @@ class ChannelsCommandTest {
                 }
                 double w = Double.parseDouble(want.get(k));
                 double g = Double.parseDouble(got.get(k));
-                assertEquals(w, g, 1e-6 * Math.abs(w), want.get("channel") + " " + k + ": scipy " + w + ", riffle " + g);
+                assertEquals(w, g, 1e-6 * Math.abs(w), want.get("channel") + " " + k + ": reference " + w + ", riffle " + g);
             }
-            assertEquals("1", got.get("rate_hz"));
-            assertEquals("39", got.get("span_s"));
+            rows.add(got);
         }
+        return rows;
     }
 
     @Test
