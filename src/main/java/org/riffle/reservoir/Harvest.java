@@ -26,8 +26,8 @@ final class Harvest {
      */
     static void run(Reservoir r, double[] input, double[] target, int washout, Sink sink) {
         int n = r.units();
-        double[] x = new double[n];
-        double[] pre = new double[n];
+        Reservoir.State s = r.newState();
+        double[] x = s.x;
         double[] z = new double[n + 2];
         z[0] = 1;
         int since = 0;
@@ -37,11 +37,11 @@ final class Harvest {
                 throw new CancellationException("reservoir run cancelled");
             }
             if (Double.isNaN(u)) {
-                java.util.Arrays.fill(x, 0);
+                s.reset();
                 since = 0;
                 continue;
             }
-            r.step(x, pre, u);
+            r.step(s, u);
             since++;
             double y = target[t];
             if (since > washout && !Double.isNaN(y)) {
@@ -64,10 +64,22 @@ final class Harvest {
         return y;
     }
 
-    /** w · z. */
+    /** w · z, summed in four interleaved partial sums ((s0 + s1) + (s2 + s3)) + tail, a fixed order. */
     static double dot(double[] w, double[] z) {
-        double s = 0;
-        for (int i = 0; i < w.length; i++) {
+        double s0 = 0;
+        double s1 = 0;
+        double s2 = 0;
+        double s3 = 0;
+        int n = w.length;
+        int i = 0;
+        for (; i + 3 < n; i += 4) {
+            s0 += w[i] * z[i];
+            s1 += w[i + 1] * z[i + 1];
+            s2 += w[i + 2] * z[i + 2];
+            s3 += w[i + 3] * z[i + 3];
+        }
+        double s = (s0 + s1) + (s2 + s3);
+        for (; i < n; i++) {
             s += w[i] * z[i];
         }
         return s;

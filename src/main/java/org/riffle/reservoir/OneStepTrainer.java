@@ -55,7 +55,7 @@ public final class OneStepTrainer {
                 } else {
                     Folds folds = Folds.harvest(r, u, y, washout, space.folds(), stride);
                     for (double lambda : space.ridges()) {
-                        double mse = folds.validationMse(lambda);
+                        double mse = validationMse(folds, lambda);
                         double nrmse = Math.sqrt(mse / folds.targetVariance());
                         tried.add(new OneStepFit.Candidate(rho, alpha, lambda, washout, nrmse));
                         if (mse < bestMse) {
@@ -89,6 +89,15 @@ public final class OneStepTrainer {
         }
         report(progress, total, total);
         return new OneStepFit(esn, err, n == 0 ? Double.NaN : sum / n, bestNrmse, tried, stride);
+    }
+
+    /** The folds' validation error, +∞ when a readout system is numerically singular. */
+    private static double validationMse(Folds folds, double lambda) {
+        try {
+            return folds.validationMse(lambda);
+        } catch (IllegalStateException e) {
+            return Double.POSITIVE_INFINITY;
+        }
     }
 
     /** Washout of {@code r} on {@code u}: 1.5 × the observed convergence time, at least the minimum. */

@@ -4,46 +4,55 @@ import java.util.Arrays;
 import java.util.concurrent.CancellationException;
 
 /**
- * A seeded sparse reservoir: the recurrent matrix W (exactly {@link EsnParams#connections()} entries per
- * row, stored row-wise as primitive arrays), the input and bias weights, and the leaky-tanh state update
- * of {@link EsnParams}. W is drawn once from the seed and rescaled by target radius / actual radius, the
+ * A seeded sparse reservoir: the recurrent matrix W, the input and bias weights, and the leaky-tanh
+ * state update of {@link EsnParams}. W has exactly {@link EsnParams#connections()} non-zero entries per
+ * row, placed on c distinct random cyclic diagonals: W = Σ_j D_j·S^{o_j}, where S^o shifts a vector
+ * cyclically by o (row i of S^o picks column (i + o) mod N), the offsets o_j are drawn without repetition
+ * from 0..N−1 and each diagonal D_j holds its own uniform random weights in [−1, 1]. Every unit thus
+ * hears c others at fixed relative offsets with random weights: a random multi-cycle reservoir (Rodan &amp;
+ * Tiňo 2011, IEEE Trans. Neural Netw. 22:131, show that even a single cycle with one shared weight
+ * predicts as well as a fully random reservoir). The structure lets the update run as c contiguous,
+ * vectorisable passes instead of scattered look-ups. W is rescaled by target radius / actual radius, the
  * actual radius computed from all eigenvalues ({@link SpectralRadius}); rebuilding with another radius,
  * leak or scaling but the same seed, size and sparsity reuses the draw and its eigenvalues.
  *
  * <p>The activation is tanh evaluated as Lambert's continued fraction truncated to a [7/6] rational
  * function and clamped to ±1 beyond |v| = 4.97 (absolute error below 1e-4, slope never above 1; tested
- * against {@link Math#tanh}): plain arithmetic, so results are bit-identical on every JVM and thread.
+ * against {@link Math#tanh}): plain arithmetic in a fixed order, so results are bit-identical on every
+ * JVM and thread.
  *
- * <p>Immutable and thread-safe; the state arrays passed to {@link #step} belong to the caller.
+ * <p>Immutable and thread-safe; a {@link State} belongs to the caller.
  */
 public final class Reservoir {
     /** |v| beyond which the rational tanh reaches 1 and is clamped. */
     static final double TANH_CLAMP = 4.971786;
 
     private final EsnParams params;
-    private final int[] cols;
-    private final double[] raw;
+    private final int[] offsets;
+    private final double[][] raw;
     private final double rawRadius;
     private final double[] rawIn;
     private final double[] rawBias;
-    private final double[] w;
+    private final double[][] w;
     private final double[] win;
     private final double[] bias;
 
-    private Reservoir(EsnParams params, int[] cols, double[] raw, double rawRadius, double[] rawIn,
+    private Reservoir(EsnParams params, int[] offsets, double[][] raw, double rawRadius, double[] rawIn,
                       double[] rawBias) {
         this.params = params;
-        this.cols = cols;
+        this.offsets = offsets;
         this.raw = raw;
         this.rawRadius = rawRadius;
         this.rawIn = rawIn;
         this.rawBias = rawBias;
         double scale = params.spectralRadius() / rawRadius;
-        this.w = new double[raw.length];
-        for (int k = 0; k < raw.length; k++) {
-            w[k] = raw[k] * scale;
-        }
         int n = params.units();
+        this.w = new double[raw.length][n];
+        for (int j = 0; j < raw.length; j++) {
+            for (int i = 0; i < n; i++) {
+                w[j][i] = raw[j][i] * scale;
+            }
+        }
         this.win = new double[n];
         this.bias = new double[n];
         for (int i = 0; i < n; i++) {
@@ -57,23 +66,22 @@ public final class Reservoir {
         int n = params.units();
         int c = params.connections();
         Rng rng = new Rng(params.seed());
-        int[] cols = new int[n * c];
-        double[] raw = new double[n * c];
         int[] pool = new int[n];
-        for (int i = 0; i < n; i++) {
-            for (int j = 0; j < n; j++) {
-                pool[j] = j;
-            }
-            for (int k = 0; k < c; k++) {
-                int pick = k + rng.nextInt(n - k);
-                int col = pool[pick];
-                pool[pick] = pool[k];
-                pool[k] = col;
-            }
-            Arrays.sort(pool, 0, c);
-            for (int k = 0; k < c; k++) {
-                cols[i * c + k] = pool[k];
-                raw[i * c + k] = rng.nextSigned();
+        for (int j = 0; j < n; j++) {
+            pool[j] = j;
+        }
+        for (int k = 0; k < c; k++) {
+            int pick = k + rng.nextInt(n - k);
+            int o = pool[pick];
+            pool[pick] = pool[k];
+            pool[k] = o;
+        }
+        int[] offsets = Arrays.copyOf(pool, c);
+        Arrays.sort(offsets);
+        double[][] raw = new double[c][n];
+        for (int j = 0; j < c; j++) {
+            for (int i = 0; i < n; i++) {
+                raw[j][i] = rng.nextSigned();
             }
         }
         double[] rawIn = new double[n];
@@ -82,13 +90,13 @@ public final class Reservoir {
             rawIn[i] = rng.nextSigned();
             rawBias[i] = rng.nextSigned();
         }
-        double radius = SpectralRadius.of(dense(n, c, cols, raw));
+        double radius = SpectralRadius.of(dense(n, offsets, raw));
         if (!(radius > 1e-12)) {
             throw new IllegalArgumentException("reservoir seed " + params.seed() + " with " + n + " units and "
                     + c + " connections draws a nilpotent matrix (spectral radius " + radius
                     + "); choose another seed or more connections");
         }
-        return new Reservoir(params, cols, raw, radius, rawIn, rawBias);
+        return new Reservoir(params, offsets, raw, radius, rawIn, rawBias);
     }
 
     /** This reservoir's draw with other settings; redraws only when seed, size or sparsity change. */
@@ -96,7 +104,7 @@ public final class Reservoir {
         if (!params.sameStructure(other)) {
             return build(other);
         }
-        return new Reservoir(other, cols, raw, rawRadius, rawIn, rawBias);
+        return new Reservoir(other, offsets, raw, rawRadius, rawIn, rawBias);
     }
 
     public EsnParams params() {
@@ -115,39 +123,79 @@ public final class Reservoir {
 
     /** W as a dense N × N matrix (a new array; for checks). */
     public double[][] denseMatrix() {
-        return dense(params.units(), params.connections(), cols, w);
+        return dense(params.units(), offsets, w);
     }
 
-    private static double[][] dense(int n, int c, int[] cols, double[] vals) {
+    private static double[][] dense(int n, int[] offsets, double[][] vals) {
         double[][] m = new double[n][n];
-        for (int i = 0; i < n; i++) {
-            for (int k = i * c; k < (i + 1) * c; k++) {
-                m[i][cols[k]] = vals[k];
+        for (int j = 0; j < offsets.length; j++) {
+            for (int i = 0; i < n; i++) {
+                m[i][(i + offsets[j]) % n] = vals[j][i];
             }
         }
         return m;
     }
 
-    /**
-     * One update of state {@code x} (length N, overwritten) under input {@code u}; {@code pre} is
-     * scratch of length N.
-     */
-    public void step(double[] x, double[] pre, double u) {
+    /** A zero state for this reservoir, with its scratch space. */
+    public State newState() {
+        return new State(units());
+    }
+
+    /** One update of state {@code s} under input {@code u}. */
+    public void step(State s, double u) {
         int n = win.length;
-        int c = params.connections();
-        int[] cl = cols;
-        double[] wl = w;
-        for (int i = 0, k = 0; i < n; i++) {
-            double s = bias[i] + win[i] * u;
-            for (int end = k + c; k < end; k++) {
-                s += wl[k] * x[cl[k]];
+        double[] x = s.x;
+        double[] pre = s.pre;
+        double[] shifted = s.shifted;
+        for (int i = 0; i < n; i++) {
+            pre[i] = bias[i] + win[i] * u;
+        }
+        for (int j = 0; j < offsets.length; j++) {
+            int o = offsets[j];
+            System.arraycopy(x, o, shifted, 0, n - o);
+            System.arraycopy(x, 0, shifted, n - o, o);
+            double[] wj = w[j];
+            for (int i = 0; i < n; i++) {
+                pre[i] += wj[i] * shifted[i];
             }
-            pre[i] = s;
         }
         double alpha = params.leak();
         double keep = 1 - alpha;
         for (int i = 0; i < n; i++) {
             x[i] = keep * x[i] + alpha * tanh(pre[i]);
+        }
+    }
+
+    /**
+     * A reservoir state x (length N) with the scratch space of an update. Mutable, confined to one thread.
+     */
+    public static final class State {
+        final double[] x;
+        final double[] pre;
+        final double[] shifted;
+
+        State(int n) {
+            x = new double[n];
+            pre = new double[n];
+            shifted = new double[n];
+        }
+
+        /** A copy of the state vector. */
+        public double[] values() {
+            return x.clone();
+        }
+
+        /** Sets the state vector to {@code v} (copied). */
+        public void set(double[] v) {
+            if (v.length != x.length) {
+                throw new IllegalArgumentException("state of " + v.length + " values for " + x.length + " units");
+            }
+            System.arraycopy(v, 0, x, 0, x.length);
+        }
+
+        /** Back to the zero state. */
+        public void reset() {
+            Arrays.fill(x, 0);
         }
     }
 
@@ -173,20 +221,21 @@ public final class Reservoir {
      */
     public int convergenceSteps(double[] input, int maxSteps, double tolerance) {
         int n = units();
-        double[] a = new double[n];
-        double[] b = new double[n];
+        State sa = newState();
+        State sb = newState();
+        double[] a = sa.x;
+        double[] b = sb.x;
         Rng rng = new Rng(params.seed() ^ 0x5DEECE66DL);
         for (int i = 0; i < n; i++) {
             b[i] = rng.nextSigned();
         }
-        double[] pre = new double[n];
         int steps = 0;
         for (int t = 0; t < input.length && steps < maxSteps; t++) {
             if (Double.isNaN(input[t])) {
                 continue;
             }
-            step(a, pre, input[t]);
-            step(b, pre, input[t]);
+            step(sa, input[t]);
+            step(sb, input[t]);
             steps++;
             double d = 0;
             for (int i = 0; i < n; i++) {
@@ -205,13 +254,16 @@ public final class Reservoir {
     /** A 64-bit fingerprint of W, W_in and the bias exactly as used (to check a rebuilt reservoir). */
     public long fingerprint() {
         long h = 1125899906842597L;
-        for (double[] arr : new double[][] {w, win, bias}) {
+        double[][] all = Arrays.copyOf(w, w.length + 2);
+        all[w.length] = win;
+        all[w.length + 1] = bias;
+        for (double[] arr : all) {
             for (double v : arr) {
                 h = 31 * h + Double.doubleToLongBits(v);
             }
         }
-        for (int c : cols) {
-            h = 31 * h + c;
+        for (int o : offsets) {
+            h = 31 * h + o;
         }
         return h;
     }
