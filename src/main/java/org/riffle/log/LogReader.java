@@ -1,23 +1,16 @@
 package org.riffle.log;
 
+import java.io.FilterInputStream;
 import java.io.IOException;
-import java.io.Reader;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
+import java.io.InputStream;
 import java.nio.file.Path;
-import java.time.Instant;
-import java.time.LocalDateTime;
-import java.time.format.DateTimeParseException;
-import java.util.ArrayList;
-import java.util.List;
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVParser;
-import org.apache.commons.csv.CSVRecord;
 
 /**
- * Reads a log file into a {@link Recording}. The entry point of the {@code log} package.
+ * Reads a log file into a {@link Recording}. The entry point of the {@code log} package: opens the
+ * file (or standard input for {@code -}), unpacks gzip (by its magic bytes), and hands WAV recordings
+ * (a RIFF header) to the WAV reader and everything else to the delimited-text reader.
  *
- * <p>Stateless and thread-safe.
+ * <p>Stateless and thread-safe; each call reads its file once, in one streaming pass.
  */
 public final class LogReader {
     private LogReader() {
@@ -29,52 +22,49 @@ public final class LogReader {
      * @throws LogException when the file is missing, unreadable or not a log riffle can read
      */
     public static Recording read(Path file, ReadOptions options) throws LogException {
-        if (!Files.isRegularFile(file)) {
-            throw new LogException(file, Files.isDirectory(file) ? "is a directory, not a log file"
-                    : "no such file");
+        if (file.toString().equals("-")) {
+            return read(System.in, "-", options);
         }
-        try (Reader in = Files.newBufferedReader(file, StandardCharsets.UTF_8);
-             CSVParser parser = CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).get()
-                     .parse(in)) {
-            List<String> names = parser.getHeaderNames();
-            if (names.isEmpty()) {
-                throw new LogException(file, "empty file");
+        return read(Source.open(file), options, false);
+    }
+
+    /**
+     * Reads a log from an open stream (standard input, a pipe); {@code name} names it in messages. The
+     * stream is read to its end but not closed.
+     *
+     * @throws LogException when the data is not a log riffle can read
+     */
+    public static Recording read(InputStream in, String name, ReadOptions options) throws LogException {
+        return read(Source.of(new NonClosing(in), name, -1), options, false);
+    }
+
+    /** Reads with every text line sent through the general (Commons CSV) path: for tests of the fast path. */
+    static Recording readAllGeneral(Path file, ReadOptions options) throws LogException {
+        return read(Source.open(file), options, true);
+    }
+
+    private static Recording read(Source src, ReadOptions options, boolean allGeneral) throws LogException {
+        try (src) {
+            byte[] magic = Source.peek(src.in, 4);
+            if (magic.length == 4 && magic[0] == 'R' && magic[1] == 'I' && magic[2] == 'F' && magic[3] == 'F') {
+                return WavReader.read(src, options);
             }
-            int cols = names.size();
-            List<float[]> data = new ArrayList<>();
-            List<Double> times = new ArrayList<>();
-            Instant origin = null;
-            for (CSVRecord r : parser) {
-                Instant t = Instant.from(LocalDateTime.parse(r.get(0).replace(' ', 'T'))
-                        .atOffset(java.time.ZoneOffset.UTC));
-                if (origin == null) {
-                    origin = t;
-                }
-                times.add((t.toEpochMilli() - origin.toEpochMilli()) / 1000.0);
-                float[] row = new float[cols - 1];
-                for (int c = 1; c < cols; c++) {
-                    row[c - 1] = Float.parseFloat(r.get(c));
-                }
-                data.add(row);
-            }
-            double[] secs = times.stream().mapToDouble(Double::doubleValue).toArray();
-            double rate = secs.length > 1 ? (secs.length - 1) / (secs[secs.length - 1] - secs[0]) : 1;
-            List<Channel> channels = new ArrayList<>();
-            for (int c = 1; c < cols; c++) {
-                float[] v = new float[data.size()];
-                for (int i = 0; i < v.length; i++) {
-                    v[i] = data.get(i)[c - 1];
-                }
-                channels.add(Channel.adopt(names.get(c), "", v));
-            }
-            SourceFacts facts = new SourceFacts(file.toString(), Files.size(file), "csv ','", "UTF-8",
-                    List.of(), List.of());
-            return new Recording(facts, TimeBase.adoptExplicit(secs, rate, origin), channels, List.of(),
-                    List.of());
+            return TextReader.read(src, options, allGeneral);
         } catch (IOException e) {
-            throw new LogException(file, "cannot read: " + e.getMessage());
-        } catch (DateTimeParseException | NumberFormatException e) {
-            throw new LogException(file, "not a log riffle can read yet: " + e.getMessage());
+            throw new LogException(src.name, 0, 0, e instanceof Source.Damaged ? e.getMessage()
+                    : "cannot read: " + e.getMessage());
+        }
+    }
+
+    /** Keeps standard input open when the source is closed. */
+    private static final class NonClosing extends FilterInputStream {
+        NonClosing(InputStream in) {
+            super(in);
+        }
+
+        @Override
+        public void close() {
+            // the caller owns the stream
         }
     }
 }

@@ -2,6 +2,7 @@ package org.riffle.log;
 
 import java.util.List;
 import java.util.Objects;
+import java.util.Optional;
 
 /**
  * Where a recording came from and how it was read: the file as named, its size, the dialect that was
@@ -14,14 +15,22 @@ import java.util.Objects;
  * @param encoding the character encoding used, {@code ""} for binary formats
  * @param preamble lines before the table (device, serial, interval, comments), as read
  * @param warnings things the reader noticed and the user should know, each one line
+ * @param dialect the layout of a delimited text log; empty for binary formats (WAV)
  */
 public record SourceFacts(String file, long sizeBytes, String format, String encoding,
-                          List<String> preamble, List<String> warnings) {
+                          List<String> preamble, List<String> warnings, Optional<Dialect> dialect) {
     public SourceFacts {
         Objects.requireNonNull(file, "file");
         Objects.requireNonNull(format, "format");
         Objects.requireNonNull(encoding, "encoding");
+        Objects.requireNonNull(dialect, "dialect");
         preamble = List.copyOf(preamble);
         warnings = List.copyOf(warnings);
+    }
+
+    /** Facts without a dialect (binary formats, tests). */
+    public SourceFacts(String file, long sizeBytes, String format, String encoding, List<String> preamble,
+                       List<String> warnings) {
+        this(file, sizeBytes, format, encoding, preamble, warnings, Optional.empty());
     }
 }

@@ -1,0 +1,304 @@
+package org.riffle.log;
+
+import java.io.IOException;
+import java.nio.charset.Charset;
+
+/**
+ * The one streaming pass over the rows of a delimited log. A line without a double quote is split at
+ * byte level and its cells parsed in place (the fast path); a line with one is decoded and split by
+ * {@link Splitter} (Commons CSV), its fields encoded back and fed to the same cell parsers, so both
+ * paths give identical values by construction.
+ *
+ * <p>Ragged rows: a row with fewer fields than the header keeps its cells and counts the rest as
+ * missing samples; up to one such row per thousand (at least one: a last line cut short by a power
+ * loss) is accepted with a warning, more is refused as an inconsistent table. A row with more non-empty
+ * fields than the header is refused at once: its cells cannot be placed. A row whose time does not read
+ * is dropped with a warning under the same allowance (its samples have no place in time).
+ *
+ * <p>Mutable; confined to the reading thread.
+ */
+final class TablePass {
+    private final String file;
+    private final Layout layout;
+    private final byte[] roles;
+    private final int ncols;
+    private final byte delim;
+    private final boolean whitespace;
+    private final boolean decimalComma;
+    private final Charset charset;
+    private final Stamps.Order order;
+    private final boolean allGeneral;
+    final Columns cols;
+    final RowLines rowLines = new RowLines();
+    final Damage damage = new Damage();
+
+    private int cell;
+    private long stamp;
+    private long day;
+    private long tod;
+    private double number;
+    private long line;
+    private byte[] lineBuf;
+    private int lineStart;
+    private long t0 = Stamps.FAIL;
+    private double x0 = Double.NaN;
+    private String badTimeText;
+
+    TablePass(String file, Layout layout, Charset charset, int capacity, boolean allGeneral) {
+        this.file = file;
+        this.layout = layout;
+        this.roles = layout.roles();
+        this.ncols = layout.columns();
+        char d = layout.dialect().delimiter();
+        this.delim = (byte) d;
+        this.whitespace = d == Dialect.WHITESPACE;
+        this.decimalComma = layout.dialect().decimalComma();
+        this.charset = charset;
+        this.order = layout.order();
+        this.allGeneral = allGeneral;
+        boolean[] stored = new boolean[ncols];
+        for (int j = 0; j < ncols; j++) {
+            stored[j] = roles[j] == Layout.VALUE;
+        }
+        this.cols = new Columns(stored, layout.hasTime(), capacity);
+    }
+
+    /** Reads every line from {@code in}, skipping those before the data. */
+    void run(LineReader in) throws IOException, LogException {
+        long dataLine = layout.dataLine();
+        while (in.next()) {
+            line = in.lineNumber();
+            if (line < dataLine) {
+                continue;
+            }
+            byte[] b = in.buffer();
+            int s = in.start();
+            int e = in.end();
+            if (isBlankOrComment(b, s, e)) {
+                continue;
+            }
+            if (!cols.ensureRoom()) {
+                throw new LogException(file, line, 0, "more rows than riffle can hold (" + cols.rows + ")");
+            }
+            beginRow(b, s);
+            if (allGeneral || in.quoted()) {
+                generalRow(in, b, s, e);
+            } else if (whitespace) {
+                fastWhitespaceRow(b, s, e);
+            } else {
+                fastRow(b, s, e);
+            }
+            endRow();
+        }
+    }
+
+    private static boolean isBlankOrComment(byte[] b, int s, int e) {
+        if (s == e || b[s] == '#' || (b[s] == '/' && e - s > 1 && b[s + 1] == '/')) {
+            return true;
+        }
+        for (int i = s; i < e; i++) {
+            if (b[i] != ' ' && b[i] != '\t') {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private void beginRow(byte[] b, int s) {
+        cell = 0;
+        stamp = Stamps.FAIL;
+        day = Stamps.FAIL;
+        tod = Stamps.FAIL;
+        number = Double.NaN;
+        lineBuf = b;
+        lineStart = s;
+        if (damage.badTimeRows == 0) {
+            badTimeText = null;
+        }
+    }
+
+    private void fastRow(byte[] b, int s, int e) throws LogException {
+        byte d = delim;
+        int from = s;
+        for (int i = s; i < e; i++) {
+            if (b[i] == d) {
+                cell(b, from, i);
+                from = i + 1;
+            }
+        }
+        cell(b, from, e);
+    }
+
+    private void fastWhitespaceRow(byte[] b, int s, int e) throws LogException {
+        int i = s;
+        while (true) {
+            while (i < e && (b[i] == ' ' || b[i] == '\t')) {
+                i++;
+            }
+            if (i == e) {
+                return;
+            }
+            int from = i;
+            while (i < e && b[i] != ' ' && b[i] != '\t') {
+                i++;
+            }
+            cell(b, from, i);
+        }
+    }
+
+    /** The Commons CSV path: decode, join lines while a quoted field is open, split, feed the cells. */
+    private void generalRow(LineReader in, byte[] b, int s, int e) throws IOException, LogException {
+        String text = new String(b, s, e - s, charset);
+        long first = line;
+        while ((Splitter.quotes(text) & 1) == 1) {
+            if (!in.next() || text.length() > LineReader.MAX_LINE) {
+                throw new LogException(file, first, 0, "a quoted field opened here is never closed");
+            }
+            text = text + "\n" + new String(in.buffer(), in.start(), in.end() - in.start(), charset);
+        }
+        lineBuf = null;
+        for (String f : Splitter.split(text, whitespace ? Dialect.WHITESPACE : (char) delim)) {
+            byte[] fb = f.getBytes(charset);
+            cell(fb, 0, fb.length);
+        }
+        line = first;
+    }
+
+    private void cell(byte[] b, int s, int e) throws LogException {
+        int j = cell++;
+        if (j >= ncols) {
+            extra(b, s, e);
+            return;
+        }
+        switch (roles[j]) {
+            case Layout.VALUE:
+                float v = Numbers.parse(b, s, e, decimalComma);
+                if (v != v) {
+                    nonNumeric(j, b, s, e);
+                }
+                cols.values[j][cols.rows] = v;
+                break;
+            case Layout.STAMP:
+                stamp = Stamps.parse(b, s, e, order);
+                noteBadTime(stamp == Stamps.FAIL, b, s, e);
+                break;
+            case Layout.DATE:
+                day = Stamps.parse(b, s, e, order);
+                noteBadTime(day == Stamps.FAIL, b, s, e);
+                break;
+            case Layout.TIME_OF_DAY:
+                tod = Stamps.timeOfDay(b, s, e);
+                noteBadTime(tod == Stamps.FAIL, b, s, e);
+                break;
+            default:
+                number = Numbers.parseDouble(b, s, e, decimalComma) * layout.timeScale();
+                noteBadTime(Double.isNaN(number), b, s, e);
+                break;
+        }
+    }
+
+    private void noteBadTime(boolean bad, byte[] b, int s, int e) {
+        if (bad && damage.badTimeRows == 0 && badTimeText == null) {
+            badTimeText = new String(b, s, e - s, charset).strip();
+        }
+    }
+
+    private void nonNumeric(int j, byte[] b, int s, int e) {
+        String t = new String(b, s, e - s, charset).strip();
+        if (!Numbers.isMissingToken(t)) {
+            cols.text(j, t);
+        }
+    }
+
+    private void extra(byte[] b, int s, int e) throws LogException {
+        for (int i = s; i < e; i++) {
+            if (b[i] != ' ' && b[i] != '\t') {
+                long column = lineBuf == null ? 0 : new String(lineBuf, lineStart, s - lineStart, charset).length() + 1;
+                throw new LogException(file, line, column, "more fields than the " + ncols + " columns of the header;"
+                        + " check the delimiter (--delimiter) or quote fields that hold it");
+            }
+        }
+    }
+
+    private void endRow() {
+        int row = cols.rows;
+        if (cell < ncols) {
+            for (int j = cell; j < ncols; j++) {
+                if (cols.values[j] != null) {
+                    cols.values[j][row] = Float.NaN;
+                }
+            }
+            damage.shortRow(line, cell);
+        }
+        if (cols.seconds != null) {
+            double t = seconds();
+            if (Double.isNaN(t)) {
+                if (damage.badTimeRows++ == 0) {
+                    damage.firstBadTimeLine = line;
+                    damage.firstBadTime = badTimeText;
+                }
+                return;
+            }
+            cols.seconds[row] = t;
+        }
+        rowLines.note(row, line);
+        cols.rows = row + 1;
+    }
+
+    /** Seconds of this row from the first row's time (elapsed columns: as written); NaN when unreadable. */
+    private double seconds() {
+        long ns;
+        if (stamp != Stamps.FAIL) {
+            ns = stamp;
+        } else if (day != Stamps.FAIL && tod != Stamps.FAIL) {
+            ns = day + tod;
+        } else if (tod != Stamps.FAIL && !hasRole(Layout.DATE)) {
+            ns = tod;
+        } else if (!Double.isNaN(number)) {
+            if (!layout.absoluteTime()) {
+                return number;
+            }
+            if (Double.isNaN(x0)) {
+                x0 = number;
+            }
+            return number - x0;
+        } else {
+            return Double.NaN;
+        }
+        if (t0 == Stamps.FAIL) {
+            t0 = ns;
+        }
+        return (ns - t0) * 1e-9;
+    }
+
+    private boolean hasRole(byte role) {
+        for (byte r : roles) {
+            if (r == role) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /** The first row's time: epoch nanoseconds for stamps; NaN-free only for absolute times. */
+    long firstNanos() {
+        return t0 != Stamps.FAIL ? t0 : Double.isNaN(x0) ? Stamps.FAIL : Math.round(x0 * 1e9);
+    }
+
+    /** The rows that could not be read in full, and the first of each kind. */
+    static final class Damage {
+        int shortRows;
+        long firstShortLine;
+        int firstShortFields;
+        int badTimeRows;
+        long firstBadTimeLine;
+        String firstBadTime = "";
+
+        void shortRow(long line, int fields) {
+            if (shortRows++ == 0) {
+                firstShortLine = line;
+                firstShortFields = fields;
+            }
+        }
+    }
+}

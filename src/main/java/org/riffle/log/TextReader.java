@@ -1,0 +1,103 @@
+package org.riffle.log;
+
+import java.io.ByteArrayInputStream;
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.SequenceInputStream;
+import java.nio.charset.Charset;
+import java.nio.charset.StandardCharsets;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * Reads a delimited text log: takes the first {@link #HEAD} bytes to choose the encoding and sniff the
+ * layout, then streams every line once through a {@link TablePass} and hands the columns to
+ * {@link Assembler}.
+ *
+ * <p>Stateless and thread-safe.
+ */
+final class TextReader {
+    /** Bytes looked at before reading: one more than the longest line allowed. */
+    static final int HEAD = LineReader.MAX_LINE + 1;
+    private static final int BUFFER = 1 << 20;
+
+    private TextReader() {
+    }
+
+    static Recording read(Source src, ReadOptions opt, boolean allGeneral) throws LogException {
+        byte[] head;
+        try {
+            head = src.in.readNBytes(HEAD);
+        } catch (IOException e) {
+            throw failure(src, e, 0);
+        }
+        boolean whole = head.length < HEAD;
+        Encodings.Choice enc = Encodings.choose(src.name, head, head.length, opt.charset(), whole);
+        Charset cs = enc.charset();
+        List<String> lines = headLines(src.name, head, enc.bomLength(), cs, whole,
+                opt.charset().isPresent() && cs.equals(StandardCharsets.UTF_8));
+        if (lines.isEmpty() && !whole) {
+            throw new LogException(src.name, 1, 0, "line 1 is longer than " + LineReader.MAX_LINE
+                    + " bytes: not a delimited text log (binary data, or no line breaks?)");
+        }
+        Layout layout = Sniffer.sniff(src.name, lines, opt, whole);
+        TablePass pass = new TablePass(src.name, layout, cs, capacity(src, head, lines.size(), whole), allGeneral);
+        InputStream body = new SequenceInputStream(
+                new ByteArrayInputStream(head, enc.bomLength(), head.length - enc.bomLength()), src.in);
+        LineReader in = new LineReader(body, BUFFER);
+        try {
+            pass.run(in);
+        } catch (LineReader.LineTooLong e) {
+            throw new LogException(src.name, e.line, 0, "line is longer than " + LineReader.MAX_LINE
+                    + " bytes: not a delimited text log (binary data, or no line breaks?)");
+        } catch (IOException e) {
+            throw failure(src, e, in.lineNumber());
+        }
+        return Assembler.build(src, layout, pass, cs, opt);
+    }
+
+    private static LogException failure(Source src, IOException e, long line) {
+        String where = line > 0 ? " (after line " + line + ")" : "";
+        return new LogException(src.name, 0, 0, e instanceof Source.Damaged ? e.getMessage() + where
+                : "cannot read" + where + ": " + e.getMessage());
+    }
+
+    /** The complete lines of the head, decoded; checks them when UTF-8 was asked for. */
+    private static List<String> headLines(String file, byte[] head, int from, Charset cs, boolean whole,
+                                          boolean strictUtf8) throws LogException {
+        List<String> out = new ArrayList<>();
+        int s = from;
+        for (int i = from; i <= head.length; i++) {
+            boolean last = i == head.length;
+            if (last && (!whole || s == head.length)) {
+                break;
+            }
+            if (last || head[i] == '\n') {
+                int e = i > s && head[i - 1] == '\r' ? i - 1 : i;
+                if (strictUtf8) {
+                    int bad = Encodings.firstBadUtf8(head, s, e);
+                    if (bad >= 0) {
+                        long column = new String(head, s, bad - s, cs).length() + 1;
+                        throw new LogException(file, out.size() + 1, column, "byte " + Encodings.hex(head[bad])
+                                + " is not valid UTF-8; try --encoding windows-1252");
+                    }
+                }
+                out.add(new String(head, s, e - s, cs));
+                s = i + 1;
+            }
+        }
+        return out;
+    }
+
+    /** Rows to allocate at first: from the file size and the head's bytes per line, else a small start. */
+    private static int capacity(Source src, byte[] head, int headLines, boolean whole) {
+        if (whole) {
+            return headLines + 1;
+        }
+        if (src.gzipped || src.sizeBytes <= 0 || headLines == 0) {
+            return 1 << 12;
+        }
+        double perLine = head.length / (double) headLines;
+        return (int) Math.min(1 << 28, src.sizeBytes / perLine * 1.02 + 64);
+    }
+}

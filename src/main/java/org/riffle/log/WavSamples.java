@@ -1,0 +1,95 @@
+package org.riffle.log;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.util.Arrays;
+
+/**
+ * The samples of a WAV data chunk, decoded frame by frame into one growing {@code float[]} per channel
+ * as fractions of full scale: 8-bit samples are unsigned with 128 as zero; 16, 24 and 32-bit samples
+ * are signed two's complement over 2<sup>bits-1</sup>; float samples are taken as stored.
+ *
+ * <p>Mutable; confined to the reading thread.
+ */
+final class WavSamples {
+    private static final int BLOCK = 1 << 16;
+    private final WavReader.Format f;
+    private float[][] data;
+    private int frames;
+
+    WavSamples(WavReader.Format f, int capacity) {
+        this.f = f;
+        this.data = new float[f.channels()][Math.max(16, capacity)];
+    }
+
+    /** Reads up to {@code max} frames (to the end of the stream at most); returns the number read. */
+    long readFrom(InputStream in, long max) throws IOException {
+        int align = f.blockAlign();
+        byte[] buf = new byte[Math.max(align, BLOCK / align * align)];
+        int have = 0;
+        while (frames < max) {
+            int n = in.read(buf, have, buf.length - have);
+            if (n < 0) {
+                break;
+            }
+            have += n;
+            int whole = have / align;
+            whole = (int) Math.min(whole, max - frames);
+            decode(buf, whole);
+            int used = whole * align;
+            System.arraycopy(buf, used, buf, 0, have - used);
+            have -= used;
+        }
+        return frames;
+    }
+
+    private void decode(byte[] b, int count) {
+        if (frames + count > data[0].length) {
+            int grown = (int) Math.min(Integer.MAX_VALUE - 16, Math.max(frames + (long) count, data[0].length * 3L / 2));
+            for (int c = 0; c < data.length; c++) {
+                data[c] = Arrays.copyOf(data[c], grown);
+            }
+        }
+        int bytes = f.bits() / 8;
+        boolean flt = f.tag() == 3;
+        int p = 0;
+        for (int i = 0; i < count; i++) {
+            for (int c = 0; c < data.length; c++) {
+                data[c][frames + i] = sample(b, p, bytes, flt);
+                p += bytes;
+            }
+        }
+        frames += count;
+    }
+
+    private static float sample(byte[] b, int p, int bytes, boolean flt) {
+        switch (bytes) {
+            case 1:
+                return ((b[p] & 0xFF) - 128) / 128f;
+            case 2:
+                return (short) ((b[p] & 0xFF) | b[p + 1] << 8) / 32768f;
+            case 3:
+                return ((b[p] & 0xFF) | (b[p + 1] & 0xFF) << 8 | b[p + 2] << 16) / 8388608f;
+            case 4:
+                int v = (b[p] & 0xFF) | (b[p + 1] & 0xFF) << 8 | (b[p + 2] & 0xFF) << 16 | b[p + 3] << 24;
+                return flt ? Float.intBitsToFloat(v) : (float) (v / 2147483648.0);
+            default:
+                long w = 0;
+                for (int k = 7; k >= 0; k--) {
+                    w = w << 8 | (b[p + k] & 0xFF);
+                }
+                return (float) Double.longBitsToDouble(w);
+        }
+    }
+
+    /** Channel {@code c}, cut to the frames read and multiplied by {@code scale} (1: fractions of full scale). */
+    float[] channel(int c, double scale) {
+        float[] v = Arrays.copyOf(data[c], frames);
+        if (scale != 1) {
+            for (int i = 0; i < v.length; i++) {
+                v[i] = (float) (v[i] * scale);
+            }
+        }
+        return v;
+    }
+}

@@ -1,0 +1,204 @@
+package org.riffle.note;
+
+import java.io.IOException;
+import java.nio.ByteBuffer;
+import java.nio.channels.FileChannel;
+import java.nio.channels.SeekableByteChannel;
+import java.nio.charset.CharacterCodingException;
+import java.nio.charset.CodingErrorAction;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.FileAlreadyExistsException;
+import java.nio.file.FileSystemException;
+import java.nio.file.Files;
+import java.nio.file.LinkOption;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
+import java.nio.file.attribute.FileAttribute;
+import java.nio.file.attribute.PosixFilePermissions;
+import java.security.SecureRandom;
+import java.util.Arrays;
+import java.util.HexFormat;
+import java.util.Set;
+import java.util.function.IntFunction;
+import java.util.function.Supplier;
+
+/**
+ * Crash-safe file writing: the bytes go to a fresh temporary file in the target's own folder, are
+ * flushed and synced to the device, and only then moved into place in one atomic step; the folder is
+ * synced after the move. A crash or power loss at any moment leaves either the previous state or the
+ * complete new file.
+ *
+ * <p>Symbolic links are never followed: the temporary file is created exclusively (it fails rather
+ * than open anything already at its path, a planted link included), and the final step is a rename or
+ * a hard link, which replace or refuse a link at the target but never write through it.
+ *
+ * <p>Stateless and thread-safe.
+ */
+final class AtomicFiles {
+    /** A fault hook called between writing and moving; tests throw from it to simulate a crash. */
+    interface Fault {
+        /** No fault. */
+        Fault NONE = (temp, target) -> {
+        };
+
+        void beforeMove(Path temp, Path target) throws IOException;
+    }
+
+    private static final SecureRandom RANDOM = new SecureRandom();
+    private static final int NAME_TRIES = 16;
+
+    private AtomicFiles() {
+    }
+
+    /**
+     * Writes {@code data} as a new file, never replacing anything: {@code candidates.apply(0)} if no
+     * file (or link) is there, else the first free of {@code candidates.apply(1..tries-1)}.
+     *
+     * @return the path written
+     * @throws FileAlreadyExistsException when every candidate is taken
+     */
+    static Path writeNew(IntFunction<Path> candidates, int tries, byte[] data, Fault fault) throws IOException {
+        Path first = candidates.apply(0).toAbsolutePath();
+        Path temp = writeTemp(first, data, false, AtomicFiles::randomTag);
+        try {
+            fault.beforeMove(temp, first);
+            for (int i = 0; i < tries; i++) {
+                Path target = candidates.apply(i).toAbsolutePath();
+                if (Files.exists(target, LinkOption.NOFOLLOW_LINKS)) {
+                    continue;
+                }
+                if (linkOrMove(temp, target)) {
+                    syncFolder(target.getParent());
+                    return target;
+                }
+            }
+            throw new FileAlreadyExistsException(first.toString(), null,
+                    "it and " + (tries - 1) + " numbered alternatives exist");
+        } finally {
+            Files.deleteIfExists(temp);
+        }
+    }
+
+    /**
+     * Writes {@code data} to {@code target}, atomically replacing what is there (a planted link is
+     * replaced, not followed). With {@code owner} the file is readable by its owner only.
+     */
+    static void replace(Path target, byte[] data, boolean owner, Fault fault) throws IOException {
+        Path abs = target.toAbsolutePath();
+        Path temp = writeTemp(abs, data, owner, AtomicFiles::randomTag);
+        try {
+            fault.beforeMove(temp, abs);
+            Files.move(temp, abs, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+            syncFolder(abs.getParent());
+        } finally {
+            Files.deleteIfExists(temp);
+        }
+    }
+
+    /** Hard-links {@code temp} at {@code target} (refuses an existing target); false when taken meanwhile. */
+    private static boolean linkOrMove(Path temp, Path target) throws IOException {
+        try {
+            Files.createLink(target, temp);
+            return true;
+        } catch (FileAlreadyExistsException e) {
+            return false;
+        } catch (UnsupportedOperationException | FileSystemException e) {
+            // No hard links here (FAT, some network shares): check, then rename. The window between
+            // the check and the rename is the price of such a file system.
+            if (Files.exists(target, LinkOption.NOFOLLOW_LINKS)) {
+                return false;
+            }
+            Files.move(temp, target, StandardCopyOption.ATOMIC_MOVE);
+            return true;
+        }
+    }
+
+    private static String randomTag() {
+        byte[] r = new byte[6];
+        RANDOM.nextBytes(r);
+        return HexFormat.of().formatHex(r);
+    }
+
+    /**
+     * Creates {@code .NAME.TAG.tmp} beside {@code target} exclusively (trying fresh tags from
+     * {@code tags} while a name is taken, by a file or a link alike), writes and syncs {@code data}.
+     */
+    static Path writeTemp(Path target, byte[] data, boolean owner, Supplier<String> tags) throws IOException {
+        Path dir = target.getParent();
+        IOException last = null;
+        for (int i = 0; i < NAME_TRIES; i++) {
+            Path temp = dir.resolve("." + target.getFileName() + "." + tags.get() + ".tmp");
+            boolean created = false;
+            try (FileChannel ch = FileChannel.open(temp, Set.of(StandardOpenOption.CREATE_NEW,
+                    StandardOpenOption.WRITE, LinkOption.NOFOLLOW_LINKS), attributes(dir, owner))) {
+                created = true;
+                ByteBuffer b = ByteBuffer.wrap(data);
+                while (b.hasRemaining()) {
+                    ch.write(b);
+                }
+                ch.force(true);
+                return temp;
+            } catch (FileAlreadyExistsException e) {
+                last = e;
+            } catch (IOException e) {
+                if (created) {
+                    Files.deleteIfExists(temp);
+                }
+                throw e;
+            }
+        }
+        throw last;
+    }
+
+    private static FileAttribute<?>[] attributes(Path dir, boolean owner) {
+        if (owner && dir.getFileSystem().supportedFileAttributeViews().contains("posix")) {
+            return new FileAttribute<?>[] {PosixFilePermissions.asFileAttribute(PosixFilePermissions.fromString(
+                    "rw-------"))};
+        }
+        return new FileAttribute<?>[0];
+    }
+
+    /**
+     * Reads a small text file of riffle's own as strict UTF-8, refusing to follow a symbolic link.
+     *
+     * @throws NoteException when it is a link, too big, or not UTF-8
+     * @throws IOException when it cannot be read
+     */
+    static String readOwn(Path file, int maxBytes) throws IOException, NoteException {
+        if (Files.isSymbolicLink(file)) {
+            throw new NoteException(file, "is a symbolic link, not a file riffle wrote; not followed"
+                    + " (remove it if you did not put it there)");
+        }
+        byte[] data;
+        try (SeekableByteChannel ch = Files.newByteChannel(file, StandardOpenOption.READ,
+                LinkOption.NOFOLLOW_LINKS)) {
+            if (ch.size() > maxBytes) {
+                throw new NoteException(file, "is " + ch.size() + " bytes, more than the " + maxBytes
+                        + " such a file can have; not read");
+            }
+            ByteBuffer b = ByteBuffer.allocate((int) ch.size());
+            while (b.hasRemaining()) {
+                if (ch.read(b) < 0) {
+                    break;
+                }
+            }
+            data = Arrays.copyOf(b.array(), b.position());
+        }
+        try {
+            return StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
+                    .onUnmappableCharacter(CodingErrorAction.REPORT).decode(ByteBuffer.wrap(data)).toString();
+        } catch (CharacterCodingException e) {
+            throw new NoteException(file, "is not valid UTF-8; the file is damaged");
+        }
+    }
+
+    /** Syncs a folder's entry list so a rename survives power loss; ignored where unsupported. */
+    private static void syncFolder(Path dir) {
+        try (FileChannel ch = FileChannel.open(dir, StandardOpenOption.READ)) {
+            ch.force(true);
+        } catch (IOException e) {
+            // Not every platform lets a folder be opened for sync; the rename itself is still atomic.
+        }
+    }
+}

@@ -1,0 +1,101 @@
+package org.riffle.signal;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.function.IntToDoubleFunction;
+
+/**
+ * A channel drawn as a row (or rows) of text cells. The samples are split into {@code width}
+ * consecutive, nearly equal runs (cell c covers samples [⌊c·n/w⌋, ⌊(c+1)·n/w⌋), at least one sample
+ * when n ≥ 1); each cell stands for the range min..max of its run, scaled between the channel's
+ * smallest and largest value. In one row a cell shows the top of its range, so a single spike is never
+ * averaged away; in several rows a cell is filled from the bottom of its range to its top. Glyphs are
+ * the eighth blocks U+2581..U+2588 in Unicode mode and the ramp {@value #ASCII_RAMP} otherwise (eight
+ * steps each). A cell whose samples are all missing ({@code NaN}, or not finite) is a blank; a channel
+ * with a single value draws every present cell at half height.
+ *
+ * <p>Pure functions; stateless and thread-safe.
+ */
+public final class Sparkline {
+    /** The eight ASCII steps, lowest first. */
+    public static final String ASCII_RAMP = ".:-=+*#@";
+    private static final String BLOCKS = "\u2581\u2582\u2583\u2584\u2585\u2586\u2587\u2588";
+
+    private Sparkline() {
+    }
+
+    /** One row of {@code width} cells for {@code x}. */
+    public static String render(double[] x, int width, boolean unicode) {
+        return render(i -> x[i], x.length, width, 1, unicode).get(0);
+    }
+
+    /** One row of {@code width} cells for {@code x}. */
+    public static String render(float[] x, int width, boolean unicode) {
+        return render(i -> x[i], x.length, width, 1, unicode).get(0);
+    }
+
+    /**
+     * {@code rows} rows of {@code width} cells, top row first, for the {@code n} samples that
+     * {@code sample} returns for 0..n−1.
+     */
+    public static List<String> render(IntToDoubleFunction sample, int n, int width, int rows, boolean unicode) {
+        if (width < 1 || rows < 1 || n < 0) {
+            throw new IllegalArgumentException("sparkline of " + n + " samples in " + width + " cells × "
+                    + rows + " rows: need width ≥ 1, rows ≥ 1, samples ≥ 0");
+        }
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
+        double[] cellMin = new double[width];
+        double[] cellMax = new double[width];
+        for (int c = 0; c < width; c++) {
+            double mn = Double.POSITIVE_INFINITY;
+            double mx = Double.NEGATIVE_INFINITY;
+            int from = (int) ((long) c * n / width);
+            int to = Math.max((int) ((long) (c + 1) * n / width), Math.min(n, from + 1));
+            for (int i = from; i < to; i++) {
+                double v = sample.applyAsDouble(i);
+                if (Double.isFinite(v)) {
+                    mn = Math.min(mn, v);
+                    mx = Math.max(mx, v);
+                }
+            }
+            cellMin[c] = mn;
+            cellMax[c] = mx;
+            lo = Math.min(lo, mn);
+            hi = Math.max(hi, mx);
+        }
+        String glyphs = unicode ? BLOCKS : ASCII_RAMP;
+        int levels = 8 * rows;
+        List<String> out = new ArrayList<>(rows);
+        for (int r = rows - 1; r >= 0; r--) {
+            StringBuilder sb = new StringBuilder(width);
+            for (int c = 0; c < width; c++) {
+                sb.append(glyph(cellMin[c], cellMax[c], lo, hi, levels, r, glyphs));
+            }
+            out.add(sb.toString());
+        }
+        return out;
+    }
+
+    /** The glyph of row {@code r} (0 = bottom) for a cell spanning [mn, mx] on the scale [lo, hi]. */
+    private static char glyph(double mn, double mx, double lo, double hi, int levels, int r, String glyphs) {
+        if (mn > mx) {
+            return ' ';
+        }
+        int top;
+        int bottom;
+        if (hi > lo) {
+            top = Math.max(1, (int) Math.ceil((mx - lo) / (hi - lo) * levels));
+            bottom = Math.min(levels - 1, (int) Math.floor((mn - lo) / (hi - lo) * levels));
+        } else {
+            top = Math.max(1, levels / 2);
+            bottom = top - 1;
+        }
+        int rowBase = 8 * r;
+        if (top <= rowBase || bottom >= rowBase + 8) {
+            return ' '; // the row lies wholly above or below the cell's range
+        }
+        int fill = Math.min(8, top - rowBase);
+        return glyphs.charAt(fill - 1);
+    }
+}

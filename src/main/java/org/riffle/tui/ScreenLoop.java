@@ -1,0 +1,112 @@
+package org.riffle.tui;
+
+import com.googlecode.lanterna.screen.Screen;
+import java.io.IOException;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.BlockingQueue;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.LinkedBlockingQueue;
+import java.util.concurrent.TimeUnit;
+import java.util.function.LongConsumer;
+import org.riffle.log.Recording;
+import org.riffle.triage.TriageParams;
+
+/**
+ * The UI thread's loop: block on the event queue (with a one-second timeout that becomes a timer
+ * tick, so an idle screen wakes once a second and does nothing else), apply every queued event, then
+ * draw once. Keys, resizes, analysis progress and save results all arrive through the same queue;
+ * nothing but this loop touches the screen.
+ *
+ * <p>{@link #post} is thread-safe; everything else is confined to the thread that calls {@link #run}
+ * or {@link #step}.
+ */
+final class ScreenLoop {
+    private static final long TICK_NANOS = TimeUnit.SECONDS.toNanos(1);
+
+    private final BlockingQueue<Event> queue = new LinkedBlockingQueue<>();
+    private final Renderer renderer;
+    private final ExecutorService io;
+    final Controller controller;
+    private long lastTick = System.nanoTime();
+    private long keysHandled;
+    private LongConsumer onFrame = k -> { };
+
+    ScreenLoop(Screen screen, List<Recording> recordings, ScreenOptions options, NoteDesk desk) {
+        List<Source> sources = new ArrayList<>();
+        for (Recording r : recordings) {
+            sources.add(new Source(r, new TriageParams(-1, -1, options.threads())));
+        }
+        this.io = Executors.newSingleThreadExecutor(r -> {
+            Thread t = new Thread(r, "riffle-note");
+            t.setDaemon(true);
+            return t;
+        });
+        this.renderer = new Renderer(screen, options);
+        this.controller = new Controller(new ScreenState(sources), options, desk, this::post, io);
+    }
+
+    /** Queues an event for the UI thread. Thread-safe. */
+    void post(Event e) {
+        queue.add(e);
+    }
+
+    /** Called after each frame with the number of keys handled so far (for the benchmark). */
+    void onFrame(LongConsumer callback) {
+        this.onFrame = callback;
+    }
+
+    /** Draws the first frame, starts the analysis, and serves events until the screen ends. */
+    Controller.Outcome run() throws IOException, InterruptedException {
+        renderer.render(controller, true);
+        controller.startAll();
+        while (controller.outcome() == Controller.Outcome.RUNNING) {
+            step(TICK_NANOS);
+        }
+        return controller.outcome();
+    }
+
+    /** Draws the current state. */
+    void render() throws IOException {
+        boolean full = controller.fullRedraw;
+        controller.fullRedraw = false;
+        renderer.render(controller, full);
+    }
+
+    /** Waits up to {@code timeoutNanos} for events, applies all queued ones, draws once. */
+    void step(long timeoutNanos) throws IOException, InterruptedException {
+        Event e = queue.poll(timeoutNanos, TimeUnit.NANOSECONDS);
+        while (e != null && controller.outcome() == Controller.Outcome.RUNNING) {
+            apply(e);
+            e = queue.poll();
+        }
+        long now = System.nanoTime();
+        if (now - lastTick >= TICK_NANOS) {
+            lastTick = now;
+            apply(new Event.Tick());
+        }
+        if (controller.outcome() == Controller.Outcome.RUNNING) {
+            render();
+            onFrame.accept(keysHandled);
+        }
+    }
+
+    private void apply(Event e) {
+        if (e instanceof Event.Key) {
+            keysHandled++;
+        }
+        controller.dispatch(e);
+    }
+
+    /** Stops the analysis and the note thread (the screen is ending). */
+    void close() {
+        controller.cancelAll();
+        io.shutdown();
+        try {
+            io.awaitTermination(5, TimeUnit.SECONDS);
+        } catch (InterruptedException ex) {
+            Thread.currentThread().interrupt();
+        }
+    }
+}

@@ -1,0 +1,45 @@
+package org.riffle.tui;
+
+import java.util.Locale;
+import java.util.Map;
+
+/**
+ * How the screen draws: the ASCII form or Unicode, colour or none, and how many worker threads the
+ * analysis may use. Immutable.
+ *
+ * @param ascii draw with ASCII only (ramp {@code _.-:=+*#} for sparklines, {@code +-|} for lines)
+ * @param color use colour as a second cue beside the symbols and words (never the only one)
+ * @param threads worker threads for the analysis, at least 1
+ */
+public record ScreenOptions(boolean ascii, boolean color, int threads) {
+    public ScreenOptions {
+        if (threads < 1) {
+            throw new IllegalArgumentException("threads " + threads + " must be at least 1");
+        }
+    }
+
+    /**
+     * Options from the environment: ASCII unless the locale ({@code LC_ALL}, else {@code LC_CTYPE},
+     * else {@code LANG}) names UTF-8, or when {@code asciiRequested}; no colour when {@code NO_COLOR}
+     * is set to anything non-empty (no-color.org); one core left to the screen when there are several.
+     */
+    public static ScreenOptions fromEnvironment(Map<String, String> env, boolean asciiRequested) {
+        boolean ascii = asciiRequested || !utf8Locale(env);
+        String noColor = env.get("NO_COLOR");
+        boolean color = noColor == null || noColor.isEmpty();
+        int cores = Runtime.getRuntime().availableProcessors();
+        return new ScreenOptions(ascii, color, Math.max(1, cores - 1));
+    }
+
+    /** True when the locale the environment names uses UTF-8. */
+    static boolean utf8Locale(Map<String, String> env) {
+        for (String key : new String[] {"LC_ALL", "LC_CTYPE", "LANG"}) {
+            String v = env.get(key);
+            if (v != null && !v.isEmpty()) {
+                String u = v.toUpperCase(Locale.ROOT).replace("-", "");
+                return u.contains("UTF8");
+            }
+        }
+        return false;
+    }
+}
