@@ -139,10 +139,16 @@ public final class Analyzer {
 
     private BaselineModel shell(Recording recording, Baseline baseline) {
         int rows = baseline.toRow() - baseline.fromRow();
-        String source = baseline.sameLog() ? recording.source().file() + ", " + baseline.description()
+        String source = baseline.sameLog() ? baseline.description() + " of " + fileName(recording)
                 : baseline.description();
         return new BaselineModel(source, baseline, params.windowFor(rows), params.stepFor(rows), params.quantile(),
                 params.sustained(), List.of());
+    }
+
+    private static String fileName(Recording r) {
+        String f = r.source().file();
+        int slash = Math.max(f.lastIndexOf('/'), f.lastIndexOf('\\'));
+        return f.substring(slash + 1);
     }
 
     private static List<Param> sharedParams(BaselineModel m) {

@@ -138,7 +138,7 @@ final class ChannelWork {
     private static ChannelAssessment noEstimate(Channel c, Summary stats, Optional<VibrationFigures> vibration,
                                                 List<Param> params, String reason) {
         return new ChannelAssessment(c.name(), c.unit(), stats, vibration, List.of(), List.of(),
-                Health.none(reason), params, List.of(reason), true);
+                Health.none(reason), params, List.of(), true);
     }
 
     /**

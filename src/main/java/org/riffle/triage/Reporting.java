@@ -30,10 +30,12 @@ final class Reporting {
                 : String.format(Locale.ROOT, "%.1f %% of windows", 100 * share);
     }
 
-    /** The parameters of one channel's judgement, in print order (mutable list for the caller to extend). */
+    /**
+     * The parameters of one channel's judgement, in print order (mutable list for the caller to extend);
+     * the baseline, window and calibration shared by all channels are the assessment's parameters.
+     */
     static List<Param> channelParams(ChannelModel m, BaselineModel bm, TimeBase time) {
         List<Param> p = new ArrayList<>();
-        p.add(new Param("baseline", bm.source()));
         if (!m.learned()) {
             return p;
         }
