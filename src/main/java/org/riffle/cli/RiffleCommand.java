@@ -23,6 +23,7 @@ import picocli.CommandLine.Spec;
         subcommands = {
             ChannelsCommand.class,
             OpenCommand.class,
+            ReportCommand.class,
             DemoCommand.class,
         })
 final class RiffleCommand implements Callable<Integer> {

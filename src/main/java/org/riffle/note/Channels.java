@@ -74,13 +74,14 @@ final class Channels {
     private static void judgement(Page p, ChannelAssessment c, Assessment a) {
         Health h = c.health();
         if (!h.estimated() || h.level() == null) {
-            p.field(4, LABEL, "Health", "no estimate: " + (h.estimated() ? "no level given" : h.noEstimateReason()));
-            return;
+            p.field(4, LABEL, "Health", "no estimate (" + (h.estimated() ? "no level given" : h.noEstimateReason())
+                    + ")");
+        } else {
+            String mark = h.level().mark().isBlank() ? "" : " (" + h.level().mark() + ")";
+            p.field(4, LABEL, "Health", Fmt.num(h.figure()) + " of 100 (100 = like the baseline); level "
+                    + h.level().word() + mark);
+            since(c, a).ifPresent(s -> p.field(4, LABEL, "Departed since", s));
         }
-        String mark = h.level().mark().isBlank() ? "" : " (" + h.level().mark() + ")";
-        p.field(4, LABEL, "Health", Fmt.num(h.figure()) + " of 100 (100 = like the baseline); level "
-                + h.level().word() + mark);
-        since(c, a).ifPresent(s -> p.field(4, LABEL, "Departed since", s));
         if (!c.complete()) {
             p.field(4, LABEL, "Caution", "analysis of this channel was still running when the note was written");
         }

@@ -169,7 +169,7 @@ public final class DraftStore {
         return stateFolder.resolve(digest(abs.toString()) + "-" + safe + SUFFIX);
     }
 
-    private static String digest(String s) {
+    static String digest(String s) {
         try {
             byte[] d = MessageDigest.getInstance("SHA-256").digest(s.getBytes(StandardCharsets.UTF_8));
             return HexFormat.of().formatHex(d, 0, 8);

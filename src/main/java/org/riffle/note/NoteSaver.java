@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.AccessDeniedException;
 import java.nio.file.FileAlreadyExistsException;
+import java.nio.file.FileSystemException;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
@@ -56,6 +57,11 @@ public final class NoteSaver {
         return stem.replaceAll("[^\\p{L}\\p{N}._+-]", "_") + "-note.txt";
     }
 
+    private static NoteException cannotWrite(Path dir, Exception e) {
+        return new NoteException(dir, "cannot write in this folder (permission denied or read-only);"
+                + " choose another path for the note (your comments are kept)", e);
+    }
+
     /** The {@code i}-th name tried for {@code requested}: itself, then {@code stem-2.ext}, ... */
     static Path candidate(Path requested, int i) {
         if (i == 0) {
@@ -85,14 +91,22 @@ public final class NoteSaver {
             return AtomicFiles.writeNew(i -> candidate(abs, i), TRIES, note.getBytes(StandardCharsets.UTF_8),
                     fault);
         } catch (AccessDeniedException | ReadOnlyFileSystemException e) {
-            throw new NoteException(dir, "cannot write in this folder (permission denied or read-only);"
-                    + " choose another path for the note (your comments are kept)", e);
+            throw cannotWrite(dir, e);
         } catch (FileAlreadyExistsException e) {
             throw new NoteException(abs, "this name and " + (TRIES - 1) + " numbered alternatives are taken;"
                     + " choose another name", e);
         } catch (NoSuchFileException e) {
+            if (Files.isDirectory(dir)) {
+                throw cannotWrite(dir, e);
+            }
             throw new NoteException(dir, "the folder went away while saving; choose another path"
                     + " (your comments are kept)", e);
+        } catch (FileSystemException e) {
+            if (String.valueOf(e.getReason()).contains("Read-only file system")) {
+                throw cannotWrite(dir, e);
+            }
+            throw new NoteException(abs, "could not save the note (" + Text.clean(String.valueOf(e.getMessage()))
+                    + "); check free space or choose another path (your comments are kept)", e);
         } catch (IOException e) {
             throw new NoteException(abs, "could not save the note (" + Text.clean(String.valueOf(e.getMessage()))
                     + "); check free space or choose another path (your comments are kept)", e);

@@ -165,7 +165,7 @@ public final class NoteWriter {
                 count[c.health().level().ordinal()]++;
                 String name = Channels.title(c, a, all.size() > 1);
                 if (c.health().level() == Level.DEPARTED) {
-                    departed.add(name + Channels.since(c, a).map(s -> " (since " + s + ")").orElse(""));
+                    departed.add(name + Channels.since(c, a).map(s -> ", since " + s).orElse(""));
                 } else if (c.health().level() == Level.WATCH) {
                     watch.add(name);
                 }

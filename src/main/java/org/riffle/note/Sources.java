@@ -41,8 +41,8 @@ final class Sources {
             p.field(2, LABEL + 6, label, a.baseline().description());
         }
         stored.ifPresent(b -> {
-            p.field(2, LABEL + 6, "Stored baseline", b.id() + " of asset " + b.asset() + ", saved "
-                    + Fmt.utc(b.saved()) + " by riffle " + b.riffleVersion());
+            p.field(2, LABEL + 6, "Stored baseline", b.id() + " of asset " + b.asset());
+            p.field(2, LABEL + 6, "Saved", Fmt.utc(b.saved()) + " by riffle " + b.riffleVersion());
             p.field(2, LABEL + 6, "Learned from", b.sourceFile() + ", " + b.span());
             p.field(2, LABEL + 6, "Its SHA-256", "");
             p.para(4, b.sourceSha256());

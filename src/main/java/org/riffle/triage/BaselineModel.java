@@ -51,6 +51,7 @@ public record BaselineModel(String source, Baseline baseline, int window, int st
      * @param embeddingDimension RQA embedding dimension m, 0 when RQA was not computed
      * @param embeddingDelay RQA delay τ in samples, 0 when RQA was not computed
      * @param rqaRadius RQA threshold ε fixed from the baseline, NaN when RQA was not computed
+     * @param rqaSettings the RQA parameters as used, ready to print, {@code ""} when not computed
      * @param reservoir the trained reservoir, empty when the novelty could not be learned
      * @param measures each measure's baseline distribution over the baseline windows
      * @param alertLevel the calibrated alert level of the window score
@@ -58,12 +59,14 @@ public record BaselineModel(String source, Baseline baseline, int window, int st
      */
     public record ChannelModel(String name, String unit, String noEstimateReason, double mean, double std,
                                int decimation, double analysisRateHz, int embeddingDimension, int embeddingDelay,
-                               double rqaRadius, Optional<ReservoirModel> reservoir, List<MeasureModel> measures,
+                               double rqaRadius, String rqaSettings, Optional<ReservoirModel> reservoir,
+                               List<MeasureModel> measures,
                                double alertLevel, List<String> notes) {
         public ChannelModel {
             Objects.requireNonNull(name, "name");
             Objects.requireNonNull(unit, "unit");
             Objects.requireNonNull(noEstimateReason, "noEstimateReason");
+            Objects.requireNonNull(rqaSettings, "rqaSettings");
             Objects.requireNonNull(reservoir, "reservoir");
             measures = List.copyOf(measures);
             notes = List.copyOf(notes);
@@ -74,7 +77,7 @@ public record BaselineModel(String source, Baseline baseline, int window, int st
 
         /** A channel nothing could be learned for. */
         static ChannelModel none(String name, String unit, String reason) {
-            return new ChannelModel(name, unit, reason, Double.NaN, Double.NaN, 1, Double.NaN, 0, 0, Double.NaN,
+            return new ChannelModel(name, unit, reason, Double.NaN, Double.NaN, 1, Double.NaN, 0, 0, Double.NaN, "",
                     Optional.empty(), List.of(), Double.NaN, List.of());
         }
 

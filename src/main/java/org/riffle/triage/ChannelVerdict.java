@@ -11,14 +11,14 @@ import org.riffle.log.TimeBase;
  *     the baseline, strictly falling as the departure grows, 50 at twice the alert level;</li>
  * <li>level: departed when the last judged window is departed; watch when any of the last
  *     {@code sustained} judged windows is above T, or a sustained departure occurred after the baseline,
- *     or more than 5 % of the windows after the baseline are above T; steady otherwise;</li>
+ *     or more than 10 % of the windows after the baseline are above T; steady otherwise;</li>
  * <li>since: the first window of the first sustained departure outside the baseline.</li>
  * </ul>
  * Stateless.
  */
 final class ChannelVerdict {
     /** Share of flagged windows after the baseline that makes a channel "watch" by itself. */
-    static final double FLAGGED_SHARE_WATCH = 0.05;
+    static final double FLAGGED_SHARE_WATCH = 0.10;
 
     private ChannelVerdict() {
     }

@@ -57,9 +57,10 @@ final class ChannelWork {
         if (!nov.reason().isEmpty()) {
             notes.add(nov.reason());
         }
-        Optional<RqaStep.Learned> rqa = RqaStep.learn(base, w);
+        RqaStep.Outcome outcome = RqaStep.learn(base, w);
+        Optional<RqaStep.Learned> rqa = outcome.learned();
         if (rqa.isEmpty()) {
-            notes.add(RqaStep.reason());
+            notes.add(outcome.reason());
         }
         values[1] = rqa.map(r -> r.baselineValues()[0]).orElse(nans(w.count()));
         values[2] = rqa.map(r -> r.baselineValues()[1]).orElse(nans(w.count()));
@@ -67,7 +68,7 @@ final class ChannelWork {
         values[4] = w.means(base, 0);
         values[5] = w.stds(base, 0, values[4]);
         MeasureModel[] models = new MeasureModel[NAMES.size()];
-        double[] floors = {0.02, 0.005, 0.005, 0.005, 1e-3 * s.std(), 1e-3 * s.std()};
+        double[] floors = {0.02, 0.01, 0.02, 0.02, 1e-3 * s.std(), 1e-3 * s.std()};
         int present = 0;
         for (int k = 0; k < models.length; k++) {
             models[k] = Judge.model(NAMES.get(k), values[k], floors[k]);
@@ -77,8 +78,8 @@ final class ChannelWork {
         double alert = Judge.alertLevel(Judge.scores(models, values), p.quantile(), present, independent);
         return new ChannelModel(c.name(), c.unit(), "", s.mean(), s.std(), d, rateHz / d,
                 rqa.map(RqaStep.Learned::dimension).orElse(0), rqa.map(RqaStep.Learned::delay).orElse(0),
-                rqa.map(RqaStep.Learned::radius).orElse(Double.NaN), nov.model(), Arrays.asList(models), alert,
-                notes);
+                rqa.map(RqaStep.Learned::radius).orElse(Double.NaN), rqa.map(RqaStep.Learned::settings).orElse(""),
+                nov.model(), Arrays.asList(models), alert, notes);
     }
 
     /** Why samples summarised by {@code s} (of {@code n} rows) cannot be judged, {@code ""} when they can. */

@@ -48,8 +48,7 @@ final class Reporting {
                 + (m.unit().isEmpty() ? "" : " " + m.unit()) + " (baseline)"));
         m.reservoir().ifPresent(r -> reservoirParams(p, r));
         if (m.embeddingDimension() > 0) {
-            p.add(new Param("embedding", "m " + m.embeddingDimension() + ", delay " + m.embeddingDelay()));
-            p.add(new Param("RQA radius", num(m.rqaRadius()) + " (fixed from the baseline)"));
+            p.add(new Param("recurrence", m.rqaSettings()));
         }
         p.add(new Param("window", bm.window() + " samples, step " + bm.step()));
         p.add(new Param("calibration quantile", num(bm.quantile())));

@@ -9,7 +9,7 @@ import org.riffle.reservoir.EsnParams;
  * @param baselineFrom first baseline row, or -1 for the default (first 25 %)
  * @param baselineTo end of the baseline rows (exclusive), or -1 for the default
  * @param threads worker threads, at least 1 (results do not depend on it)
- * @param window trend window in samples, 0 for automatic (baseline rows / 16, clamped to 50..1000)
+ * @param window trend window in samples, 0 for automatic (baseline rows / 16, clamped to 100..1000)
  * @param step trend step in samples, 0 for automatic (half the window)
  * @param reservoir reservoir settings; with {@code search} its radius, leak and ridge are only the start
  * @param search true to choose spectral radius, leak and ridge by the automatic search on the baseline
@@ -99,7 +99,7 @@ public record TriageParams(int baselineFrom, int baselineTo, int threads, int wi
 
     /** The trend window for a baseline of {@code baselineRows} rows. */
     public int windowFor(int baselineRows) {
-        return window > 0 ? window : Math.max(50, Math.min(1000, baselineRows / 16));
+        return window > 0 ? window : Math.max(100, Math.min(1000, baselineRows / 16));
     }
 
     /** The trend step for a baseline of {@code baselineRows} rows. */

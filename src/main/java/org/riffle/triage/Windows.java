@@ -31,6 +31,10 @@ final class Windows {
         return length;
     }
 
+    int step() {
+        return step;
+    }
+
     /** Mean of {@code x[from + start, from + end)} per window, NaN where more than half is missing. */
     double[] means(double[] x, int from) {
         double[] out = new double[count];

@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assumptions.assumeFalse;
+import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
@@ -118,6 +119,15 @@ class NoteSaverTest {
         } finally {
             Files.setPosixFilePermissions(ro, PosixFilePermissions.fromString("rwxr-xr-x"));
         }
+    }
+
+    @Test
+    void aFolderNobodyCanWriteIsAClearMessageEvenForRoot() {
+        Path proc = Path.of("/proc");
+        assumeTrue(Files.isDirectory(proc.resolve("self")), "Linux /proc, where no one can create a file");
+        NoteException e = assertThrows(NoteException.class, () -> NoteSaver.save(proc.resolve("p3.txt"), NOTE));
+        assertEquals("/proc: cannot write in this folder (permission denied or read-only);"
+                + " choose another path for the note (your comments are kept)", e.getMessage());
     }
 
     @Test

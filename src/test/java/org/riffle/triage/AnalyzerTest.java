@@ -89,7 +89,7 @@ class AnalyzerTest {
         assertFalse(a.channels().get(0).health().estimated());
         Recording shortLog = Scenarios.recording("short", Scenarios.ar1(300, 0.5, 1, 5));
         Assessment s = new Analyzer(small(1)).assess(shortLog, TriageListener.NONE);
-        assertEquals("too short: the baseline (75 samples) holds 2 windows of 50 samples, at least 8 are needed",
+        assertEquals("too short: the baseline (75 samples) holds 0 windows of 100 samples, at least 8 are needed",
                 s.channels().get(0).health().noEstimateReason());
     }
 

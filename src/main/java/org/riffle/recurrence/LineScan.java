@@ -1,0 +1,218 @@
+package org.riffle.recurrence;
+
+import java.util.concurrent.CancellationException;
+
+/**
+ * Scans a band of rows [a, b) of the upper triangle (j − i ≥ w) of one segment's recurrence matrix and
+ * counts its lines, holding only O(N) state: two rows of recurrence bits, one run counter per diagonal and
+ * one per column. Each row is computed as bits (64 cells a word), then:
+ * <ul>
+ * <li>a diagonal run ends where the previous row's bit j − 1 is set and this row's bit j is not;</li>
+ * <li>a column run (the upper part of a vertical line) ends where the previous row's bit j is set and this
+ *     row's is not (the Theiler band clears it, which is how the band cuts vertical lines);</li>
+ * <li>a run of set bits within a row is, by symmetry, the lower part of the vertical line in column i.</li>
+ * </ul>
+ * Runs that reach the band's first row from above, or are still open after its last row, are handed to
+ * {@link LineMerge} as top and bottom pieces so that bands scanned on different threads join exactly.
+ *
+ * <p>Confined to one thread.
+ */
+final class LineScan {
+    private static final int BLOCK = 512;
+
+    final long[] diagHist;
+    final long[] vertHist;
+    final int[] topDiag;
+    final int[] topCol;
+    final int[] botDiag;
+    final int[] botCol;
+    long recurrent;
+
+    private final Segment seg;
+    private final int w;
+    private final int n;
+    private final int words;
+    private final long tb1;
+    private final int a;
+    private final int b;
+    private final boolean openTop;
+    private final boolean openBottom;
+    private final int[] diag;
+    private final int[] col;
+    private final double[] buf = new double[BLOCK];
+    private final PlotMarks plot;
+    private long[] cur;
+    private long[] prev;
+
+    /**
+     * @param valueThreshold cells with distance value ≤ this recur (see {@link Segment#valueThreshold})
+     * @param rowsTotal rows of the whole triangle, {@link Segment#rows}
+     * @param plot thumbnail marks to set, or {@code null}
+     */
+    LineScan(Segment seg, int theiler, double valueThreshold, int a, int b, int rowsTotal, PlotMarks plot) {
+        this.seg = seg;
+        this.w = theiler;
+        this.n = seg.vectors();
+        this.words = (n >>> 6) + 1;
+        this.tb1 = Double.doubleToRawLongBits(valueThreshold) + 1;
+        this.a = a;
+        this.b = b;
+        this.openTop = a > 0;
+        this.openBottom = b < rowsTotal;
+        this.diag = new int[n + 1];
+        this.col = new int[n + 1];
+        this.diagHist = new long[n + 1];
+        this.vertHist = new long[n + 1];
+        this.topDiag = openTop ? new int[n + 1] : null;
+        this.topCol = openTop ? new int[n + 1] : null;
+        this.botDiag = openBottom ? new int[n + 1] : null;
+        this.botCol = openBottom ? new int[n + 1] : null;
+        this.plot = plot;
+        this.cur = new long[words];
+        this.prev = new long[words];
+    }
+
+    /** Adds this band's thumbnail marks to {@code into}. */
+    void orInto(PlotMarks into) {
+        if (plot != null) {
+            into.or(plot);
+        }
+    }
+
+    /** Scans rows [a, b). */
+    LineScan run() {
+        for (int i = a; i < b; i++) {
+            if ((i & 31) == 0 && Thread.currentThread().isInterrupted()) {
+                throw new CancellationException("recurrence analysis cancelled");
+            }
+            fillBits(i);
+            ends(i);
+            starts(i);
+            long[] t = prev;
+            prev = cur;
+            cur = t;
+        }
+        if (openBottom) {
+            closeBottom();
+        }
+        return this;
+    }
+
+    /** Row i's recurrence bits into {@code cur}, words from one before the previous row's first. */
+    private void fillBits(int i) {
+        int jStart = i + w;
+        int ws = Math.max(0, ((i - 1 + w) >>> 6) - 1);
+        if (jStart >= n) {
+            java.util.Arrays.fill(cur, ws, words, 0L);
+            return;
+        }
+        int j0 = jStart & ~63;
+        java.util.Arrays.fill(cur, ws, j0 >>> 6, 0L);
+        for (int blk = j0; blk < n; blk += BLOCK) {
+            int end = Math.min(n, blk + BLOCK);
+            seg.distances(i, blk, end, buf);
+            int len = end - blk;
+            for (int q0 = 0; q0 < len; q0 += 64) {
+                int lim = Math.min(64, len - q0);
+                long bits = 0;
+                for (int t = 0; t < lim; t++) {
+                    bits |= ((Double.doubleToRawLongBits(buf[q0 + t]) - tb1) >>> 63) << t;
+                }
+                cur[(blk + q0) >>> 6] = bits;
+            }
+        }
+        cur[j0 >>> 6] &= -1L << (jStart & 63);
+        java.util.Arrays.fill(cur, ((n - 1) >>> 6) + 1, words, 0L);
+    }
+
+    /** Records the diagonal and column runs that ended in row i − 1. */
+    private void ends(int i) {
+        for (int k = (i - 1 + w) >>> 6; k < words; k++) {
+            long p = prev[k];
+            long c = cur[k];
+            long sp = (p << 1) | (k > 0 ? prev[k - 1] >>> 63 : 0L);
+            long e = sp & ~c;
+            while (e != 0) {
+                int j = (k << 6) | Long.numberOfTrailingZeros(e);
+                int d = j - i;
+                int run = diag[d];
+                diag[d] = 0;
+                if (openTop && i - run == a) {
+                    topDiag[d] = run;
+                } else {
+                    diagHist[run]++;
+                }
+                e &= e - 1;
+            }
+            e = p & ~c;
+            while (e != 0) {
+                int j = (k << 6) | Long.numberOfTrailingZeros(e);
+                int run = col[j];
+                col[j] = 0;
+                if (openTop && i - run == a) {
+                    topCol[j] = run;
+                } else {
+                    vertHist[run]++;
+                }
+                e &= e - 1;
+            }
+        }
+    }
+
+    /** Extends the runs through row i's recurrent cells and records the row's own runs. */
+    private void starts(int i) {
+        int last = -2;
+        int run = 0;
+        for (int k = (i + w) >>> 6; k < words; k++) {
+            long c = cur[k];
+            if (c == 0) {
+                continue;
+            }
+            recurrent += Long.bitCount(c);
+            while (c != 0) {
+                int j = (k << 6) | Long.numberOfTrailingZeros(c);
+                diag[j - i]++;
+                col[j]++;
+                if (j == last + 1) {
+                    run++;
+                } else {
+                    if (run > 0) {
+                        vertHist[run]++;
+                    }
+                    run = 1;
+                }
+                last = j;
+                if (plot != null) {
+                    plot.mark(i, j);
+                }
+                c &= c - 1;
+            }
+        }
+        if (run > 0) {
+            vertHist[run]++;
+        }
+    }
+
+    /** Hands the runs still open after the last row to the merge; negative top length = spans the band. */
+    private void closeBottom() {
+        int i = b - 1;
+        for (int k = (i + w) >>> 6; k < words; k++) {
+            long c = prev[k];
+            while (c != 0) {
+                int j = (k << 6) | Long.numberOfTrailingZeros(c);
+                int d = j - i;
+                if (openTop && b - diag[d] == a) {
+                    topDiag[d] = -diag[d];
+                } else {
+                    botDiag[d] = diag[d];
+                }
+                if (openTop && b - col[j] == a) {
+                    topCol[j] = -col[j];
+                } else {
+                    botCol[j] = col[j];
+                }
+                c &= c - 1;
+            }
+        }
+    }
+}

@@ -1,0 +1,136 @@
+package org.riffle.recurrence;
+
+import org.riffle.embed.Embedding;
+
+/**
+ * One run of samples, delay-embedded: computes distances between its delay vectors one row at a time.
+ * A "distance value" here is the squared Euclidean distance {@code Σ_k (x_i[k] − x_j[k])²} summed in
+ * ascending k (so a brute-force √ of the same sum agrees bit for bit), or the maximum norm
+ * {@code max_k |x_i[k] − x_j[k]|}. Both are non-negative doubles, so their raw IEEE bits order them.
+ *
+ * <p>Immutable (holds its own copy of the samples); thread-safe.
+ */
+final class Segment {
+    private final double[] s;
+    private final int from;
+    private final int m;
+    private final int tau;
+    private final boolean max;
+    private final int vectors;
+
+    /** Embeds {@code series[from, to)}; the samples must be finite. */
+    Segment(double[] series, int from, int to, Embedding e, RqaParams.Norm norm) {
+        this.s = java.util.Arrays.copyOfRange(series, from, to);
+        this.from = from;
+        this.m = e.dimension();
+        this.tau = e.delay();
+        this.max = norm == RqaParams.Norm.MAX;
+        this.vectors = e.vectors(to - from);
+    }
+
+    /** N, the number of delay vectors. */
+    int vectors() {
+        return vectors;
+    }
+
+    /** First sample of the run in the caller's series. */
+    int from() {
+        return from;
+    }
+
+    /** Rows of the upper triangle that can hold a cell, plus one empty row that closes every line. */
+    int rows(int theiler) {
+        return vectors >= theiler ? vectors - theiler + 1 : 0;
+    }
+
+    /** Cells of the upper triangle with j − i ≥ w. */
+    long upperCells(int theiler) {
+        long k = Math.max(0, vectors - theiler);
+        return k * (k + 1) / 2;
+    }
+
+    /** Eligible cells of the full matrix: N² minus the band |i − j| &lt; w. */
+    long eligible(int theiler) {
+        return 2 * upperCells(theiler);
+    }
+
+    /** Cells of the upper triangle in rows [0, row). */
+    long cellsBefore(int row, int theiler) {
+        long k = Math.max(0, vectors - theiler);
+        long r = Math.min(row, k);
+        return r * k - r * (r - 1) / 2;
+    }
+
+    /** Fills {@code buf[0, j1 − j0)} with the distance values from vector i to vectors j0 … j1 − 1. */
+    void distances(int i, int j0, int j1, double[] buf) {
+        int len = j1 - j0;
+        double a = s[i];
+        if (max) {
+            for (int q = 0; q < len; q++) {
+                buf[q] = Math.abs(a - s[j0 + q]);
+            }
+            for (int k = 1; k < m; k++) {
+                int off = k * tau;
+                double b = s[i + off];
+                int base = j0 + off;
+                for (int q = 0; q < len; q++) {
+                    double d = Math.abs(b - s[base + q]);
+                    buf[q] = d > buf[q] ? d : buf[q];
+                }
+            }
+            return;
+        }
+        for (int q = 0; q < len; q++) {
+            double d = a - s[j0 + q];
+            buf[q] = d * d;
+        }
+        for (int k = 1; k < m; k++) {
+            int off = k * tau;
+            double b = s[i + off];
+            int base = j0 + off;
+            for (int q = 0; q < len; q++) {
+                double d = b - s[base + q];
+                buf[q] += d * d;
+            }
+        }
+    }
+
+    /** The distance value between vectors i and j, with the same arithmetic as {@link #distances}. */
+    double distance(int i, int j) {
+        double acc = 0;
+        for (int k = 0; k < m; k++) {
+            double d = s[i + k * tau] - s[j + k * tau];
+            if (max) {
+                d = Math.abs(d);
+                acc = d > acc ? d : acc;
+            } else {
+                acc = k == 0 ? d * d : acc + d * d;
+            }
+        }
+        return acc;
+    }
+
+    /** The distance value as a distance in the channel's unit (√ for Euclidean). */
+    double toDistance(double value) {
+        return max ? value : Math.sqrt(value);
+    }
+
+    /**
+     * The largest distance value v with toDistance(v) ≤ ε: cells recur exactly when their value ≤ this.
+     * For the maximum norm that is ε itself; for Euclidean, the largest double whose correctly rounded
+     * square root is ≤ ε.
+     */
+    double valueThreshold(double epsilon) {
+        if (max) {
+            return epsilon;
+        }
+        double c = epsilon * epsilon;
+        while (c > 0 && Math.sqrt(c) > epsilon) {
+            c = Math.nextDown(c);
+        }
+        while (c < Double.MAX_VALUE && Math.sqrt(Math.nextUp(c)) <= epsilon) {
+            c = Math.nextUp(c);
+        }
+        return c;
+    }
+}

@@ -1,0 +1,159 @@
+package org.riffle.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.junit.jupiter.api.Assumptions.assumeTrue;
+
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.riffle.note.Findings;
+import org.riffle.note.NoteWriter;
+import org.riffle.triage.TriageParams;
+
+class ReportCommandTest {
+    static final String LOG = "src/test/resources/org/riffle/note/booster-p3.csv";
+
+    @TempDir
+    Path dir;
+
+    @Test
+    void aNoteIsWrittenWithWhatWasGivenAndWhereItWentIsPrinted() throws Exception {
+        Path note = dir.resolve("p3.txt");
+        MainTest.Run r = MainTest.run("report", LOG, "-o", note.toString(), "--site", "Hollow Creek",
+                "--asset", "P-3", "--point", "outboard bearing", "--technician", "R. Ortiz",
+                "--conditions", "1480 r/min", "--comment", "Escalated to the analyst.");
+        assertEquals(0, r.status(), r.err());
+        assertEquals("note: " + note + "\n", r.out());
+        assertEquals("", r.err());
+        String text = Files.readString(note, StandardCharsets.UTF_8);
+        for (String line : List.of("  Site:                   Hollow Creek", "  Asset:                  P-3",
+                "  Measuring point:        outboard bearing", "  Technician:             R. Ortiz",
+                "  Operating conditions:   1480 r/min", "  Escalated to the analyst.",
+                "  " + LOG, "  [4/4] bearing temp [", "END OF NOTE")) {
+            assertTrue(text.contains(line + "\n") || text.contains(line), "missing '" + line + "' in\n" + text);
+        }
+        assertTrue(text.startsWith("RIFFLE FINDINGS NOTE\nWritten "), text);
+    }
+
+    @Test
+    void anExistingNoteIsKeptAndTheNewNameIsShown() throws Exception {
+        Path note = Files.writeString(dir.resolve("p3.txt"), "an older note\n");
+        MainTest.Run r = MainTest.run("report", LOG, "-o", note.toString());
+        assertEquals(0, r.status(), r.err());
+        Path second = dir.resolve("p3-2.txt");
+        assertEquals("note: " + second + "\n", r.out());
+        assertEquals("riffle: " + note + " exists and was kept; the note went to " + second + "\n", r.err());
+        assertEquals("an older note\n", Files.readString(note));
+        assertTrue(Files.readString(second).startsWith("RIFFLE FINDINGS NOTE\n"));
+    }
+
+    @Test
+    void aDashSendsTheNoteToStandardOutputAndAFolderTakesTheDefaultName() throws Exception {
+        MainTest.Run r = MainTest.run("report", LOG, "-o", "-", "--ascii");
+        assertEquals(0, r.status(), r.err());
+        assertTrue(r.out().startsWith("RIFFLE FINDINGS NOTE\n") && r.out().endsWith("END OF NOTE\n"), r.out());
+        assertTrue(r.out().chars().allMatch(c -> c < 0x80), "--ascii gives ASCII only");
+        r = MainTest.run("report", LOG, "-o", dir.toString());
+        assertEquals(0, r.status(), r.err());
+        assertEquals("note: " + dir.resolve("booster-p3-note.txt") + "\n", r.out());
+    }
+
+    @Test
+    void metricsGoToCsvWithOneRowPerChannel() throws Exception {
+        Path csv = dir.resolve("figures.csv");
+        MainTest.Run r = MainTest.run("report", LOG, "-o", dir.resolve("n.txt").toString(), "--metrics",
+                csv.toString());
+        assertEquals(0, r.status(), r.err());
+        assertTrue(r.out().endsWith("metrics: " + csv + "\n"), r.out());
+        List<String> lines = Files.readAllLines(csv, StandardCharsets.UTF_8);
+        assertEquals(5, lines.size(), String.join("\n", lines));
+        assertTrue(lines.get(0).startsWith("file,channel,unit,samples,missing,min,max,mean,std,rms"), lines.get(0));
+        assertTrue(lines.get(2).startsWith(LOG + ",discharge,bar,120,0,5.808,6.521,"), lines.get(2));
+    }
+
+    @Test
+    void aFolderGivesOneNotePerLogAndOneSummaryAndSkipsABadLog() throws Exception {
+        Path logs = Files.createDirectory(dir.resolve("logs"));
+        Files.copy(Path.of(LOG), logs.resolve("a.csv"));
+        Files.copy(Path.of(LOG), logs.resolve("b.csv"));
+        Files.write(logs.resolve("c.csv"), new byte[] {0x1f, 0x01, 0x02, 0x03, 0x00, 0x7f});
+        Files.writeString(logs.resolve("readme.md"), "not a log\n");
+        Files.writeString(logs.resolve("old-note.txt"), "riffle's own output is not a log\n");
+        Path out = Files.createDirectory(dir.resolve("out"));
+        MainTest.Run r = MainTest.run("report", logs.toString(), "-o", out.toString(), "--asset", "P-3");
+        assertEquals(ExitCode.BAD_INPUT, r.status(), r.err());
+        assertEquals("note: " + out.resolve("a-note.txt") + "\nnote: " + out.resolve("b-note.txt") + "\nsummary: "
+                + out.resolve("riffle-summary.csv") + "\n", r.out());
+        assertTrue(r.err().startsWith("riffle: " + logs.resolve("c.csv") + ": "), r.err());
+        assertEquals(1, r.err().lines().count(), r.err());
+        List<String> summary = Files.readAllLines(out.resolve("riffle-summary.csv"));
+        assertEquals(9, summary.size(), "header and 4 channels of each good log");
+        assertTrue(summary.get(5).startsWith(logs.resolve("b.csv") + ",suction,bar,"), summary.get(5));
+        assertTrue(Files.readString(out.resolve("b-note.txt")).contains("Asset:                  P-3"));
+    }
+
+    @Test
+    void theProgressLineIsDrawnOnlyForATerminal() throws Exception {
+        Path logs = Files.createDirectory(dir.resolve("logs"));
+        Files.copy(Path.of(LOG), logs.resolve("a.csv"));
+        Files.copy(Path.of(LOG), logs.resolve("b.csv"));
+        for (boolean terminal : new boolean[] {true, false}) {
+            StringWriter out = new StringWriter();
+            StringWriter err = new StringWriter();
+            Path o = Files.createDirectory(dir.resolve("o" + terminal));
+            int status = new ReportBatch(new PrintWriter(out), new PrintWriter(err), terminal).run(List.of(logs), o,
+                    null, new TriageParams(-1, -1, 2), NoteWriter.standard(), Findings.EMPTY);
+            assertEquals(0, status, err.toString());
+            assertEquals(terminal, err.toString().contains("\rriffle report: 2 of 2 logs done"), err.toString());
+            assertEquals(terminal, !err.toString().isEmpty(), "nothing on a non-terminal: '" + err + "'");
+        }
+    }
+
+    @Test
+    void filesAndFoldersTogetherAreAUsageError() {
+        MainTest.Run r = MainTest.run("report", LOG, dir.toString());
+        assertEquals(ExitCode.USAGE, r.status());
+        assertTrue(r.err().startsWith("riffle: give either log files or folders of logs, not both\n"), r.err());
+    }
+
+    @Test
+    void aBadBaselineSpanIsAUsageErrorAndOneTooLongIsBadInput() {
+        MainTest.Run r = MainTest.run("report", LOG, "-o", "-", "--baseline", "30");
+        assertEquals(ExitCode.USAGE, r.status());
+        assertTrue(r.err().startsWith("riffle: --baseline '30' must be A:B with whole row numbers 0 <= A < B\n"),
+                r.err());
+        r = MainTest.run("report", LOG, "-o", "-", "--baseline", "10:500");
+        assertEquals(ExitCode.BAD_INPUT, r.status());
+        assertEquals("riffle: " + LOG + ": --baseline 10:500 ends after the last row of this log (120 rows)\n",
+                r.err());
+    }
+
+    @Test
+    void anUnwritableFolderIsOneLineAndStatus1() {
+        assumeTrue(Files.isDirectory(Path.of("/proc/self")), "Linux /proc, where no one can create a file");
+        MainTest.Run r = MainTest.run("report", LOG, "-o", "/proc/p3.txt");
+        assertEquals(ExitCode.FAILED, r.status());
+        assertEquals("riffle: /proc: cannot write in this folder (permission denied or read-only); choose another"
+                + " path for the note (your comments are kept)\n", r.err());
+        assertFalse(r.err().contains("Exception"));
+    }
+
+    @Test
+    void aMissingLogIsBadInput() {
+        MainTest.Run r = MainTest.run("report", "no-such.csv", "-o", "-");
+        assertEquals(ExitCode.BAD_INPUT, r.status());
+        assertEquals("riffle: no-such.csv: no such file\n", r.err());
+    }
+
+    @Test
+    void helpMatchesTheGoldenText() {
+        Golden.assertMatches("report-help.expected.txt", MainTest.run("report", "--help").out());
+    }
+}
