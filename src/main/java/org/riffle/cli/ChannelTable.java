@@ -7,8 +7,12 @@ import java.util.function.Function;
 import org.riffle.log.Channel;
 import org.riffle.log.Recording;
 import org.riffle.log.TimeIssue;
+import org.riffle.signal.Severity;
 import org.riffle.signal.Sparkline;
 import org.riffle.signal.Summary;
+import org.riffle.signal.Unit;
+import org.riffle.signal.Vibration;
+import org.riffle.signal.VibrationParams;
 
 /**
  * The table that {@code riffle channels} prints: one row per numeric channel, as aligned text or as
@@ -17,7 +21,8 @@ import org.riffle.signal.Summary;
  */
 final class ChannelTable {
     /** One numeric channel with everything its row shows. */
-    record Row(Channel channel, Summary stats, double rateHz, double spanSeconds, long gaps, String sparkline) {
+    record Row(Channel channel, Summary stats, double rateHz, double spanSeconds, long gaps, String sparkline,
+               Severity severity) {
     }
 
     /** A column: CSV name, text heading, whether it is text (left-aligned), and its value in each form. */
@@ -53,19 +58,23 @@ final class ChannelTable {
             Column.number("skewness", "skew", r -> r.stats().skewness()),
             new Column("span_s", "span", false, r -> Decimal.format(r.spanSeconds(), Decimal.CSV_DIGITS, ""),
                     r -> Decimal.span(r.spanSeconds())),
-            Column.count("gaps", "gaps", Row::gaps));
+            Column.count("gaps", "gaps", Row::gaps),
+            Column.number("velocity_rms_mm_s", "vel mm/s", r -> r.severity().velocityRmsMmS()),
+            new Column("zone", "zone", true, r -> r.severity().zone().map(Enum::name).orElse(""),
+                    r -> r.severity().zone().map(Enum::name).orElse("-")));
 
     private ChannelTable() {
     }
 
-    /** The rows of {@code rec}, sparklines {@code sparkWidth} cells wide. */
-    static List<Row> rows(Recording rec, int sparkWidth, boolean unicode) {
+    /** The rows of {@code rec}, sparklines {@code sparkWidth} cells wide, severity as {@code vib} says. */
+    static List<Row> rows(Recording rec, int sparkWidth, boolean unicode, VibrationParams vib) {
         long gaps = rec.timeIssues().stream().filter(i -> i.kind() == TimeIssue.Kind.GAP).count();
         List<Row> rows = new ArrayList<>();
         for (Channel c : rec.channels()) {
             double[] x = c.toDoubles();
             rows.add(new Row(c, Summary.of(x), rec.time().rateHz(), rec.time().spanSeconds(), gaps,
-                    Sparkline.render(x, sparkWidth, unicode)));
+                    Sparkline.render(x, sparkWidth, unicode),
+                    Vibration.overall(x, rec.time().rateHz(), Unit.parse(c.unit()), vib)));
         }
         return rows;
     }

@@ -41,6 +41,9 @@ final class ChannelsCommand implements Callable<Integer> {
     @Mixin
     private ReadOptionsMixin read;
 
+    @Mixin
+    private VibrationOptions vibration;
+
     @Option(names = "--csv", description = "Write the table as CSV to standard output (no sparkline).")
     private boolean csv;
 
@@ -63,7 +66,8 @@ final class ChannelsCommand implements Callable<Integer> {
     public Integer call() throws LogException {
         Recording rec = LogReader.read(log, read.toReadOptions());
         PrintWriter out = spec.commandLine().getOut();
-        List<ChannelTable.Row> rows = ChannelTable.rows(rec, SPARK_WIDTH, !ascii && utf8(env));
+        List<ChannelTable.Row> rows = ChannelTable.rows(rec, SPARK_WIDTH, !ascii && utf8(env),
+                vibration.params());
         if (csv) {
             ChannelTable.printCsv(rows, out);
         } else {

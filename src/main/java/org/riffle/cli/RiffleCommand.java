@@ -22,9 +22,12 @@ import picocli.CommandLine.Spec;
         },
         subcommands = {
             ChannelsCommand.class,
+            SpectrumCommand.class,
             OpenCommand.class,
             ReportCommand.class,
             DemoCommand.class,
+            RqaCommand.class,
+            TrendCommand.class,
         })
 final class RiffleCommand implements Callable<Integer> {
     @Spec
