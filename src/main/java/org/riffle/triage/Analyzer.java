@@ -14,6 +14,7 @@ import org.riffle.log.Channel;
 import org.riffle.log.Recording;
 import org.riffle.log.TimeIssue;
 import org.riffle.signal.Summary;
+import org.riffle.signal.VibrationParams;
 import org.riffle.triage.BaselineModel.ChannelModel;
 
 /**
@@ -130,7 +131,8 @@ public final class Analyzer {
                                      TriageListener listener) {
         listener.progress(i, "judgement", 0.9);
         // vibration figures: filled by the vibration step where the channel is a vibration channel
-        Optional<VibrationFigures> vibration = Optional.empty();
+        Optional<VibrationFigures> vibration = VibrationStep.figures(c, recording.time().rateHz(), baseline,
+                VibrationParams.defaults());
         ChannelAssessment a = ChannelWork.assess(c, m, bm, baseline, recording.time(), resets, stats, vibration);
         listener.progress(i, "done", 1);
         listener.updated(i, a);
