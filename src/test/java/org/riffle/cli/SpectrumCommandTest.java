@@ -99,4 +99,15 @@ class SpectrumCommandTest {
                 + "(boundaries from memory - verify against the standard)"), r.out());
         assertTrue(r.out().contains("The machine maker's and the site's limits take precedence over this table."));
     }
+
+    /** The whole text output and the help, as golden text (STYLE.md §10). */
+    @Test
+    void demoTextAndHelpMatchTheGoldenText() {
+        MainTest.Run r = MainTest.run("spectrum", "fixtures/demo/af2-vibration.wav", "--sensitivity", "50",
+                "--sensitivity-unit", "m/s\u00b2", "--channel", "ch2", "--rpm", "1481", "--machine-group", "2",
+                "--support", "rigid", "--bearing", "8,22,100,0", "--band", "700:830", "--peaks", "5");
+        assertEquals(0, r.status(), r.err());
+        Golden.assertMatches("af2-vibration.spectrum.expected.txt", r.out());
+        Golden.assertMatches("spectrum-help.expected.txt", MainTest.run("spectrum", "--help").out());
+    }
 }
