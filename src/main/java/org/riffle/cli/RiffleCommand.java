@@ -26,6 +26,8 @@ import picocli.CommandLine.Spec;
             OpenCommand.class,
             ReportCommand.class,
             DemoCommand.class,
+            RqaCommand.class,
+            TrendCommand.class,
         })
 final class RiffleCommand implements Callable<Integer> {
     @Spec
