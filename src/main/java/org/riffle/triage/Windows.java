@@ -1,18 +1,24 @@
 package org.riffle.triage;
 
 /**
- * The trend windows over {@code n} samples: window k covers [k·step, k·step + length), for every k whose
- * window fits entirely. Immutable.
+ * The trend windows over {@code n} samples: window k covers [offset + k·step, offset + k·step + length),
+ * for every k whose window fits entirely. Immutable.
  */
 final class Windows {
+    private final int offset;
     private final int length;
     private final int step;
     private final int count;
 
     Windows(int n, int length, int step) {
+        this(n, length, step, 0);
+    }
+
+    Windows(int n, int length, int step, int offset) {
+        this.offset = offset;
         this.length = length;
         this.step = step;
-        this.count = n < length ? 0 : (n - length) / step + 1;
+        this.count = n < offset + length ? 0 : (n - offset - length) / step + 1;
     }
 
     int count() {
@@ -20,11 +26,11 @@ final class Windows {
     }
 
     int start(int k) {
-        return k * step;
+        return offset + k * step;
     }
 
     int end(int k) {
-        return k * step + length;
+        return offset + k * step + length;
     }
 
     int length() {
