@@ -184,7 +184,7 @@ public record BaselineModel(String source, Baseline baseline, int window, int st
      * One measure's distribution over the baseline windows.
      *
      * @param name measure name ({@code "novelty"}, {@code "RR"}, {@code "DET"}, {@code "LAM"},
-     *     {@code "mean"}, {@code "std"})
+     *     {@code "mean"}, {@code "std"}, {@code "kurtosis"})
      * @param center median of the baseline windows (of the logarithm for {@code novelty})
      * @param spread robust spread: 1.4826 × median absolute deviation, floored (see README)
      * @param values the baseline windows' values, in window order

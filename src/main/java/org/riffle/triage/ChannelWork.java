@@ -26,7 +26,7 @@ final class ChannelWork {
     /** Fewest baseline windows to calibrate on. */
     static final int MIN_BASELINE_WINDOWS = 8;
     /** The measures, in the order of {@link BaselineModel.ChannelModel#measures()}. */
-    static final List<String> NAMES = List.of("novelty", "RR", "DET", "LAM", "mean", "std");
+    static final List<String> NAMES = List.of("novelty", "RR", "DET", "LAM", "mean", "std", "kurtosis");
     /** Index of each measure's values in the recurrence rows of {@link RqaStep}: RR, DET, LAM. */
     private static final int[] RQA_ROW = {0, 1, 5};
 
@@ -75,8 +75,9 @@ final class ChannelWork {
         }
         values[4] = w.means(base, 0);
         values[5] = w.stds(base, 0, values[4]);
+        values[6] = w.kurtoses(base, 0, values[4]);
         MeasureModel[] models = new MeasureModel[NAMES.size()];
-        double[] floors = {0.02, 0.01, 0.02, 0.02, 1e-3 * s.std(), 1e-3 * s.std()};
+        double[] floors = {0.02, 0.01, 0.05, 0.05, 1e-3 * s.std(), 1e-3 * s.std(), 0.1};
         int present = 0;
         for (int k = 0; k < models.length; k++) {
             models[k] = Judge.model(NAMES.get(k), values[k], floors[k]);
@@ -122,7 +123,7 @@ final class ChannelWork {
         }
         if (!problem.isEmpty()) {
             double[] means = w.means(x, 0);
-            double[][] plain = {nans(w.count()), null, null, null, means, w.stds(x, 0, means)};
+            double[][] plain = {nans(w.count()), null, null, null, means, w.stds(x, 0, means), null};
             List<WindowRow> rows = new ArrayList<>(w.count());
             for (int k = 0; k < w.count(); k++) {
                 rows.add(Reporting.row(w, k, time, plain, rqa, Double.NaN, null));
@@ -166,6 +167,7 @@ final class ChannelWork {
         }
         v[4] = w.means(x, 0);
         v[5] = w.stds(x, 0, v[4]);
+        v[6] = w.kurtoses(x, 0, v[4]);
         return v;
     }
 

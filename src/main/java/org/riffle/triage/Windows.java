@@ -80,6 +80,37 @@ final class Windows {
         return out;
     }
 
+    /** Kurtosis m4/m2² (Pearson: 3 for a Gaussian) per window, NaN where the mean is or the spread is 0. */
+    double[] kurtoses(double[] x, int from, double[] means) {
+        double[] out = new double[count];
+        for (int k = 0; k < count; k++) {
+            if (Double.isNaN(means[k])) {
+                out[k] = Double.NaN;
+                continue;
+            }
+            double m2 = 0;
+            double m4 = 0;
+            for (int i = from + start(k); i < from + end(k); i++) {
+                if (!Double.isNaN(x[i])) {
+                    double d = x[i] - means[k];
+                    double d2 = d * d;
+                    m2 += d2;
+                    m4 += d2 * d2;
+                }
+            }
+            out[k] = m2 > 0 ? m4 * countPresent(x, from + start(k), from + end(k)) / (m2 * m2) : Double.NaN;
+        }
+        return out;
+    }
+
+    private static int countPresent(double[] x, int a, int b) {
+        int n = 0;
+        for (int i = a; i < b; i++) {
+            n += Double.isNaN(x[i]) ? 0 : 1;
+        }
+        return n;
+    }
+
     /**
      * Novelty per window from one-step errors at the analysis rate: error k is the error of predicting
      * analysis sample k + 1, which stands for input sample (k + 1)·d. The window's novelty is

@@ -30,7 +30,7 @@ class HealthCommandTest {
     Path dir;
 
     /** Two channels at 1 Hz: "steady" (AR(1) noise) and "stepped" (the same with a level step of 8 at row 2000). */
-    Path log(String name, int rows, long seed, boolean step) throws IOException {
+    static Path log(Path dir, String name, int rows, long seed, boolean step) throws IOException {
         StringBuilder sb = new StringBuilder("time,steady [bar],stepped [bar]\n");
         SplittableRandom rnd = new SplittableRandom(seed);
         double a = 0;
@@ -49,7 +49,7 @@ class HealthCommandTest {
 
     @Test
     void tableShowsHealthLevelSinceAndTheParameters() throws Exception {
-        Path p = log("pump.csv", 4000, 1, true);
+        Path p = log(dir, "pump.csv", 4000, 1, true);
         MainTest.Run r = MainTest.run("health", p.toString());
         assertEquals(0, r.status(), r.err());
         List<String> lines = r.out().lines().toList();
@@ -63,7 +63,7 @@ class HealthCommandTest {
 
     @Test
     void csvCarriesTheSameFiguresAsTheAnalyzer() throws Exception {
-        Path p = log("pump.csv", 4000, 2, true);
+        Path p = log(dir, "pump.csv", 4000, 2, true);
         MainTest.Run r = MainTest.run("health", p.toString(), "--channel", "stepped", "--csv");
         assertEquals(0, r.status(), r.err());
         Map<String, String> row = parse(r.out()).get(0);
@@ -89,8 +89,8 @@ class HealthCommandTest {
 
     @Test
     void aSeparateBaselineLogIsUsedWhole() throws Exception {
-        Path base = log("commissioning.csv", 3000, 3, false);
-        Path now = log("today.csv", 3000, 4, false);
+        Path base = log(dir, "commissioning.csv", 3000, 3, false);
+        Path now = log(dir, "today.csv", 3000, 4, false);
         MainTest.Run r = MainTest.run("health", now.toString(), "--baseline-file", base.toString(), "--csv");
         assertEquals(0, r.status(), r.err());
         for (Map<String, String> row : parse(r.out())) {
@@ -116,7 +116,7 @@ class HealthCommandTest {
 
     @Test
     void badOptionsAreUsageErrorsAndAMissingLogIsBadInput() throws Exception {
-        String p = log("pump.csv", 500, 5, false).toString();
+        String p = log(dir, "pump.csv", 500, 5, false).toString();
         RqaCommandTest.assertUsage("riffle: --baseline and --baseline-file exclude each other: give one", "health",
                 p, "--baseline", "0:100", "--baseline-file", p);
         RqaCommandTest.assertUsage("riffle: no numeric channel 'flow' in " + p + "; channels: steady, stepped",
