@@ -96,6 +96,11 @@ final class Assembler {
         return v == Math.rint(v) && Math.abs(v) < 1e15 ? Long.toString((long) v) : Double.toString(v);
     }
 
+    /** {@code "1 row"}, {@code "2 rows"}: a count with its noun. */
+    private static String rows(int n, String noun) {
+        return n + " " + noun + (n == 1 ? "" : "s");
+    }
+
     /** Refuses more short rows or unreadable times than one per thousand rows (at least one); else warns. */
     private static void checkDamage(String file, Layout layout, TablePass.Damage d, int rows, List<String> warnings)
             throws LogException {
@@ -103,20 +108,20 @@ final class Assembler {
         int columns = layout.columns();
         if (d.shortRows > allowed) {
             throw new LogException(file, d.firstShortLine, 0, d.firstShortFields + " of " + columns
-                    + " fields, and " + (d.shortRows - 1) + " more short rows: not a consistent table;"
+                    + " fields, and " + rows(d.shortRows - 1, "more short row") + ": not a consistent table;"
                     + " check the delimiter (--delimiter) or the lines to skip (--skip-rows)");
         }
         if (d.shortRows > 0) {
-            warnings.add(d.shortRows + (d.shortRows == 1 ? " row" : " rows") + " with fewer fields than the "
+            warnings.add(rows(d.shortRows, "row") + " with fewer fields than the "
                     + columns + " columns (first at line " + d.firstShortLine + "): the missing cells count as"
                     + " missing samples");
         }
         if (d.badTimeRows > allowed) {
             throw new LogException(file, d.firstBadTimeLine, 0, "'" + d.firstBadTime + "' is not a time like the"
-                    + " rows above (" + layout.timeText() + "), and " + (d.badTimeRows - 1) + " more such rows");
+                    + " rows above (" + layout.timeText() + "), and " + rows(d.badTimeRows - 1, "more such row"));
         }
         if (d.badTimeRows > 0) {
-            warnings.add(d.badTimeRows + (d.badTimeRows == 1 ? " row" : " rows") + " dropped: the time does not read"
+            warnings.add(rows(d.badTimeRows, "row") + " dropped: the time does not read"
                     + " (first at line " + d.firstBadTimeLine + ": '" + d.firstBadTime + "')");
         }
     }

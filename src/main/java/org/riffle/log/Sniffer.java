@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.regex.Pattern;
 
 /**
  * Works out the layout of a delimited log from its first lines (at most {@link #MAX_LINES}): the
@@ -11,9 +12,9 @@ import java.util.Map;
  * names and its second row units, and the decimal mark. Columns and time are then typed by
  * {@link ColumnSniffer}.
  *
- * <p>The delimiter is the candidate (comma, semicolon, tab, bar, whitespace) that splits the most lines
- * into the same number of fields (at least two); ties go to the one whose fields read more often as
- * numbers, times or missing-value tokens, then to the order tab, semicolon, comma, bar, whitespace.
+ * <p>The delimiter is the candidate (tab, semicolon, comma, bar, whitespace) that best splits the lines
+ * into the table's number of fields with cells that read as numbers, times or missing-value tokens
+ * (see {@link #chooseDelimiter}); ties go to the earlier in that order.
  *
  * <p>Stateless and thread-safe.
  */
@@ -105,56 +106,105 @@ final class Sniffer {
         return line.substring(0, e);
     }
 
-    /** The candidate delimiter that splits the most lines alike. */
+    /**
+     * The candidate delimiter that fits the lines best: the number of lines it splits into the table's
+     * width, times the share of number, time or missing-value cells among those lines in the second half
+     * of the head (the data, past any preamble and header). The share keeps dates and times, which hold
+     * spaces, from making whitespace look like a delimiter.
+     */
     static char chooseDelimiter(List<String> head, List<Integer> content) {
         char best = ',';
-        int bestScore = 0;
-        double bestValues = -1;
+        double bestFit = 0;
         for (char d : CANDIDATES) {
             List<List<String>> split = new ArrayList<>();
             for (int i : content) {
-                split.add(d == Dialect.WHITESPACE ? Splitter.splitWhitespace(head.get(i)) : Splitter.split(head.get(i), d));
+                split.add(Splitter.split(head.get(i), d));
             }
-            int k = modalWidth(split.subList(split.size() / 2, split.size()));
+            int k = modalWidth(split);
             if (k < 2) {
                 continue;
             }
-            int score = 0;
+            int lines = 0;
             int cells = 0;
             int values = 0;
-            for (List<String> f : split) {
+            for (int i = 0; i < split.size(); i++) {
+                List<String> f = split.get(i);
                 if (f.size() == k) {
-                    score++;
-                    for (String c : f) {
-                        cells++;
-                        values += ColumnSniffer.valueLike(c) ? 1 : 0;
+                    lines++;
+                    if (i >= split.size() / 2) {
+                        for (String c : f) {
+                            cells++;
+                            values += ColumnSniffer.valueLike(c) ? 1 : 0;
+                        }
                     }
                 }
             }
-            double valueShare = cells == 0 ? 0 : values / (double) cells;
-            if (score > bestScore || (score == bestScore && valueShare > bestValues + 1e-9)) {
+            double fit = cells == 0 ? 0 : lines * (values / (double) cells);
+            if (fit > bestFit + 1e-9) {
                 best = d;
-                bestScore = score;
-                bestValues = valueShare;
+                bestFit = fit;
             }
+        }
+        if (bestFit == 0 || (best == ',' && singleDecimalCommaColumn(head, content))) {
+            return decimalCommaSeen(head, content) ? ';' : ',';
         }
         return best;
     }
 
-    /** The most common number of fields among lines with two or more; ties go to the wider; 1 if none. */
+    private static final Pattern DECIMAL_COMMA = Pattern.compile(".*\\d,\\d.*");
+    private static final Pattern INTEGER = Pattern.compile("\\s*\"?[+-]?\\d+");
+    private static final Pattern FRACTION = Pattern.compile("\\d+([eE][+-]?\\d+)?\"?\\s*");
+
+    private static boolean decimalCommaSeen(List<String> head, List<Integer> content) {
+        for (int i : content) {
+            if (DECIMAL_COMMA.matcher(head.get(i)).matches()) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /**
+     * True for one column of numbers with a decimal comma and no quotes, which the comma splits in two:
+     * every line has at most one comma, and where it has one, an integer stands before it and only
+     * fraction digits after it, and some line has one.
+     */
+    private static boolean singleDecimalCommaColumn(List<String> head, List<Integer> content) {
+        int split = 0;
+        for (int i : content) {
+            List<String> f = Splitter.naive(head.get(i), ',');
+            if (f.size() > 2 || (f.size() == 2 && !(INTEGER.matcher(f.get(0)).matches()
+                    && FRACTION.matcher(f.get(1)).matches()))) {
+                return false;
+            }
+            split += f.size() == 2 ? 1 : 0;
+        }
+        return split > 0;
+    }
+
+    /**
+     * The table's width: the most common number of fields (two or more) in the second half of the lines,
+     * ties broken by how common it is among all lines, then by the wider; 1 when no line has two fields.
+     */
     static int modalWidth(List<List<String>> split) {
-        Map<Integer, Integer> freq = new HashMap<>();
-        for (List<String> f : split) {
-            if (f.size() >= 2) {
-                freq.merge(f.size(), 1, Integer::sum);
+        Map<Integer, Integer> tail = new HashMap<>();
+        Map<Integer, Integer> all = new HashMap<>();
+        for (int i = 0; i < split.size(); i++) {
+            int w = split.get(i).size();
+            if (w >= 2) {
+                all.merge(w, 1, Integer::sum);
+                if (i >= split.size() / 2) {
+                    tail.merge(w, 1, Integer::sum);
+                }
             }
         }
         int best = 1;
-        int bestCount = 0;
-        for (Map.Entry<Integer, Integer> e : freq.entrySet()) {
-            if (e.getValue() > bestCount || (e.getValue() == bestCount && e.getKey() > best)) {
+        long bestKey = -1;
+        for (Map.Entry<Integer, Integer> e : tail.entrySet()) {
+            long key = ((long) e.getValue() << 40) | ((long) all.get(e.getKey()) << 20) | e.getKey();
+            if (key > bestKey) {
                 best = e.getKey();
-                bestCount = e.getValue();
+                bestKey = key;
             }
         }
         return best;
@@ -166,7 +216,7 @@ final class Sniffer {
      * before the run of values that ends the head (its header), or the run's first line.
      */
     static int tableStart(List<List<String>> split) {
-        int k = modalWidth(split.subList(split.size() / 2, split.size()));
+        int k = modalWidth(split);
         if (k >= 2) {
             for (int i = 0; i < split.size(); i++) {
                 if (split.get(i).size() == k && (i + 1 == split.size() || split.get(i + 1).size() == k)) {
@@ -182,6 +232,16 @@ final class Sniffer {
         if (run == split.size()) {
             return split.size() - 1;
         }
+        if (run >= 2 && split.get(run - 1).size() == 1 && isBareUnit(split.get(run - 1).get(0))
+                && !ColumnSniffer.valueLike(split.get(run - 2).get(0))) {
+            return run - 2;
+        }
         return run > 0 ? run - 1 : 0;
+    }
+
+    /** A units-row cell of a single column: a unit without spaces, or anything in brackets. */
+    private static boolean isBareUnit(String cell) {
+        String c = cell.strip();
+        return (c.startsWith("[") && c.endsWith("]")) || (!c.contains(" ") && Units.looksLikeUnit(Units.strip(c)));
     }
 }

@@ -68,9 +68,19 @@ final class TimeAudit {
         }
         int total = count[0] + count[1] + count[2];
         if (total > 0) {
-            notes.add(String.format(Locale.ROOT, "time: %d gaps (steps above %.3g s), %d duplicate and %d backward"
-                    + " timestamps%s", count[0], gapAbove, count[1], count[2],
-                    total > MAX_LISTED ? "; the first " + MAX_LISTED + " are listed" : ""));
+            List<String> parts = new ArrayList<>();
+            if (count[0] > 0) {
+                parts.add(String.format(Locale.ROOT, "%d %s (steps above %.3g s)", count[0],
+                        count[0] == 1 ? "gap" : "gaps", gapAbove));
+            }
+            if (count[1] > 0) {
+                parts.add(count[1] + (count[1] == 1 ? " duplicate timestamp" : " duplicate timestamps"));
+            }
+            if (count[2] > 0) {
+                parts.add(count[2] + (count[2] == 1 ? " backward step" : " backward steps"));
+            }
+            notes.add("time: " + String.join(", ", parts) + (total > MAX_LISTED ? "; the first " + MAX_LISTED
+                    + " are listed" : ""));
         }
         return out;
     }

@@ -1,0 +1,58 @@
+package org.riffle.log;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.stream.Stream;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.MethodSource;
+import org.riffle.bench.ReadBench;
+
+/**
+ * The byte-level fast path and the general Commons CSV path give identical recordings, bit for bit: the
+ * general path (every line through Commons CSV) is the slow, obvious oracle.
+ */
+class FastPathTest {
+    static Stream<Path> textFixtures() throws IOException {
+        try (Stream<Path> s = Files.list(Path.of("fixtures", "dialects"))) {
+            List<Path> all = s.filter(p -> !p.toString().endsWith(".wav")).sorted().toList();
+            return Stream.concat(all.stream(), Stream.of(Path.of("fixtures", "demo", "af2-process.csv")));
+        }
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("textFixtures")
+    void bothPathsReadEveryFixtureAlike(Path file) throws LogException {
+        ReadOptions o = file.toString().contains("slash-dates.csv") || file.toString().contains("us-am-pm")
+                ? ReadOptions.defaults().withDateOrder(ReadOptions.DateOrder.MONTH_FIRST) : ReadOptions.defaults();
+        Recording fast = LogReader.read(file, o);
+        Recording general = LogReader.readAllGeneral(file, o);
+        Recordings.assertIdentical(fast, general, file.toString());
+    }
+
+    @Test
+    void bothPathsReadTheBenchLayoutAlike(@TempDir Path dir) throws IOException, LogException {
+        Path f = ReadBench.writeCsv(dir.resolve("bench.csv"), 3000, 8, 7L);
+        Recordings.assertIdentical(LogReader.read(f, ReadOptions.defaults()),
+                LogReader.readAllGeneral(f, ReadOptions.defaults()), "bench layout");
+    }
+
+    @Test
+    void bothPathsRefuseTheSameBadRow(@TempDir Path dir) throws IOException {
+        Path f = dir.resolve("extra.csv");
+        Files.writeString(f, "time,a\n2026-03-01 08:00:00,1\n2026-03-01 08:00:01,2,3\n");
+        LogException fast = assertThrows(LogException.class, () -> LogReader.read(f, ReadOptions.defaults()));
+        LogException general = assertThrows(LogException.class,
+                () -> LogReader.readAllGeneral(f, ReadOptions.defaults()));
+        assertEquals(f + ":3:23: more fields than the 2 columns of the header; check the delimiter (--delimiter)"
+                + " or quote fields that hold it", fast.getMessage());
+        assertEquals(f + ":3: more fields than the 2 columns of the header; check the delimiter (--delimiter)"
+                + " or quote fields that hold it", general.getMessage(), "the general path knows no column");
+    }
+}
