@@ -25,6 +25,7 @@ import picocli.CommandLine.Spec;
             SpectrumCommand.class,
             OpenCommand.class,
             ReportCommand.class,
+            BaselineCommand.class,
             DemoCommand.class,
             RqaCommand.class,
             TrendCommand.class,
