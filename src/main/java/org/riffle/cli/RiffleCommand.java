@@ -28,6 +28,7 @@ import picocli.CommandLine.Spec;
             DemoCommand.class,
             RqaCommand.class,
             TrendCommand.class,
+            BenchCommand.class,
         })
 final class RiffleCommand implements Callable<Integer> {
     @Spec
