@@ -14,8 +14,8 @@ import java.util.stream.Stream;
 /**
  * Runs benchmarks one after another: set-up (untimed), {@code warmups} unmeasured runs so the JIT
  * settles, then {@code runs} measured runs; prints one markdown table row per metric with the median,
- * min and max, the target and the verdict. Heavy benchmarks (a child JVM each run) get at most one
- * warm-up and three runs. Confined to the calling thread.
+ * min and max, the target and the verdict. A benchmark may cap its warm-ups and runs (the child
+ * JVM runs: 1 and 3; RQA at N = 100,000: 0 and 1). Confined to the calling thread.
  */
 public final class BenchRunner {
     private final int warmups;
@@ -69,8 +69,8 @@ public final class BenchRunner {
     List<Measurement> run(List<Benchmark> benchmarks, Path workDir) throws Exception {
         List<Measurement> results = new ArrayList<>();
         for (Benchmark b : benchmarks) {
-            int w = b.heavy() ? Math.min(warmups, 1) : warmups;
-            int r = b.heavy() ? Math.min(runs, 3) : runs;
+            int w = Math.min(warmups, b.maxWarmups());
+            int r = Math.min(runs, b.maxRuns());
             long t0 = System.nanoTime();
             b.setUp(workDir);
             try {

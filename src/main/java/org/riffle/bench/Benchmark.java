@@ -15,9 +15,14 @@ interface Benchmark {
     /** What {@link #runOnce} returns, in that order, each with its target. */
     List<Metric> metrics();
 
-    /** True for slow end-to-end runs (a child JVM): the harness does at most 1 warm-up and 3 runs. */
-    default boolean heavy() {
-        return false;
+    /** The most warm-ups worth doing (slow benchmarks keep the whole harness under 10 minutes). */
+    default int maxWarmups() {
+        return Integer.MAX_VALUE;
+    }
+
+    /** The most measured runs worth doing. */
+    default int maxRuns() {
+        return Integer.MAX_VALUE;
     }
 
     /** Generates or loads the input under {@code workDir}; not timed. */

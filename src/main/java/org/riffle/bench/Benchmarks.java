@@ -21,6 +21,8 @@ final class Benchmarks {
             all.add(RqaBench.targetRate(n, threads));
         }
         all.add(RqaBench.trend(sizes.trendSamples(), 1_000, 500, threads));
+        all.add(ReservoirBench.trainWithSearch(sizes.trainSamples()));
+        all.add(ReservoirBench.run(sizes.runSteps()));
         all.add(SpectrumBench.welch(sizes.welchSamples()));
         all.add(new ReportBench(sizes.rows()));
         return all;

@@ -36,8 +36,13 @@ final class ReportBench implements Benchmark {
     }
 
     @Override
-    public boolean heavy() {
-        return true;
+    public int maxWarmups() {
+        return 1;
+    }
+
+    @Override
+    public int maxRuns() {
+        return 3;
     }
 
     @Override

@@ -45,6 +45,11 @@ final class RqaBench {
     private record Given(double[] x, RqaParams params) {
     }
 
+    /** The warm-up and run caps for N: one measured run from 50,000 vectors on (N = 100,000 takes tens of s). */
+    private static int[] large(int vectors) {
+        return vectors >= 50_000 ? new int[] {0, 1} : new int[] {Integer.MAX_VALUE, Integer.MAX_VALUE};
+    }
+
     /** N vectors with the radius given (chosen once, untimed, for RR ≈ 5 %). */
     static Benchmark givenRadius(int vectors, int threads) {
         Rqa rqa = new Rqa(threads);
@@ -53,7 +58,7 @@ final class RqaBench {
                     double[] x = signal(vectors + 4, 1);
                     double eps = rqa.analyse(x, 0, x.length, PARAMS).radius();
                     return new Given(x, PARAMS.withThreshold(RqaParams.Threshold.radius(eps)));
-                }, g -> rqa.analyse(g.x(), 0, g.x().length, g.params()).rr());
+                }, g -> rqa.analyse(g.x(), 0, g.x().length, g.params()).rr()).capped(large(vectors));
     }
 
     /** N vectors with the exact target-rate search (5 %) included. */
@@ -61,7 +66,7 @@ final class RqaBench {
         Rqa rqa = new Rqa(threads);
         return new Timed<double[]>("RQA N = " + Sizes.count(vectors) + ", target-rate search",
                 targetMillis(vectors, true), dir -> signal(vectors + 4, 1),
-                x -> rqa.analyse(x, 0, x.length, PARAMS).rr());
+                x -> rqa.analyse(x, 0, x.length, PARAMS).rr()).capped(large(vectors));
     }
 
     /** The windowed trend of {@code samples} samples, baseline the first 25 %, target rate 5 %. */

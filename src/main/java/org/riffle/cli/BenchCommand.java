@@ -18,8 +18,8 @@ import picocli.CommandLine.Spec;
 /** {@code riffle bench}: every speed benchmark on generated inputs, a table of medians against the targets. */
 @Command(name = "bench", mixinStandardHelpOptions = true, sortOptions = false,
         description = {"Time riffle on large generated logs and print a table of medians against the speed "
-                + "targets: reading, RQA, the windowed trend, the reservoir, Welch spectra, the whole report "
-                + "and the screen (the last two in a fresh JVM each run, with peak resident memory).",
+                + "targets: reading, RQA, the windowed trend, the reservoir, Welch spectra and the whole report "
+                + "(in a fresh JVM each run, with its peak resident memory).",
             "The inputs are invented and generated from fixed seeds; they need about 200 MB of disk."},
         footer = {"", "Timings are wall clock; on a busy machine they are inflated (the load average is printed).",
             "Exit status: 0 every target met (or --quick), 1 a target missed, 2 usage error."})
