@@ -20,19 +20,15 @@ class MainScreenGoldenTest {
 
     private static final Path DEMO = Path.of("fixtures/demo/af2-process.csv");
 
+    /** One analysis of the demo log, the main screen at the minimum size and after a resize. */
     @Test
-    void mainScreenOfTheDemoLogAt80x24() throws Exception {
-        check("af2-main-80x24.txt", 80, 24, false);
+    void mainScreenOfTheDemoLogAt80x24AndAt120x30() throws Exception {
+        VirtualScreen v = new VirtualScreen(List.of(DEMO), 80, 24, false).analysed();
+        check("af2-main-80x24.txt", v);
+        check("af2-main-120x30.txt", v.resize(120, 30));
     }
 
-    @Test
-    void mainScreenOfTheDemoLogAt120x30InAscii() throws Exception {
-        check("af2-main-120x30-ascii.txt", 120, 30, true);
-    }
-
-    private void check(String name, int cols, int rows, boolean ascii) throws Exception {
-        Path log = DEMO;
-        VirtualScreen v = new VirtualScreen(List.of(log), cols, rows, ascii).analysed();
+    private void check(String name, VirtualScreen v) throws Exception {
         String actual = v.text();
         Path file = GOLDEN.resolve(name);
         if (Boolean.getBoolean("riffle.golden.update")) {
