@@ -3,6 +3,7 @@ package org.riffle.signal;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import java.util.Optional;
 
 /**
  * Finds spectral lines and measures them.
@@ -66,6 +67,23 @@ final class Peaks {
             return k;
         }
         return k + Math.max(-0.5, Math.min(0.5, 0.5 * (a - c) / den));
+    }
+
+    /** The strongest line (by lobe power) whose top bin is a local maximum within [loHz, hiHz]. */
+    static Optional<Peak> strongestIn(Spectrum s, double loHz, double hiHz) {
+        Peak best = null;
+        int from = Math.max(1, (int) Math.ceil(loHz / s.binHz()));
+        int to = Math.min(s.size() - 2, (int) Math.floor(hiHz / s.binHz()));
+        for (int k = from; k <= to; k++) {
+            double d = s.density(k);
+            if (d > s.density(k - 1) && d >= s.density(k + 1)) {
+                Peak p = line(s, k);
+                if (best == null || p.amplitudeRms() > best.amplitudeRms()) {
+                    best = p;
+                }
+            }
+        }
+        return Optional.ofNullable(best);
     }
 
     /**

@@ -46,15 +46,11 @@ public record ShaftSpeed(double hz, String how, boolean given) {
         if (velocity.segments() == 0 || top <= bottom) {
             return Optional.empty();
         }
-        Peak best = null;
-        for (Peak p : velocity.peaks(64, bottom)) {
-            if (p.frequencyHz() <= top && (best == null || p.amplitudeRms() > best.amplitudeRms())) {
-                best = p;
-            }
-        }
-        if (best == null) {
+        Optional<Peak> strongest = Peaks.strongestIn(velocity, bottom, top);
+        if (strongest.isEmpty()) {
             return Optional.empty();
         }
+        Peak best = strongest.get();
         String how = String.format(Locale.ROOT, "estimated: strongest velocity line between %.3g and %.3g Hz taken "
                 + "as 1x; give the speed to be sure", bottom, top);
         FaultLine half = FaultLines.check(velocity, "spectrum", "1/2", best.frequencyHz() / 2, 0.01);

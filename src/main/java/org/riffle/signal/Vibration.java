@@ -59,7 +59,8 @@ public final class Vibration {
                         throw new IllegalArgumentException("envelope band " + band.label() + " reaches above half "
                                 + "the sample rate (" + sampleRateHz / 2 + " Hz)");
                     }
-                    Spectrum e = Envelope.spectrum(x, run[0], run[1], sampleRateHz, band, p.welch());
+                    Spectrum e = Envelope.spectrum(x, run[0], run[1], sampleRateHz, band,
+                            envelopeWelch(p.welch(), run[1] - run[0], sampleRateHz));
                     envBand = Optional.of(band);
                     env = Optional.of(e);
                     lines.addAll(FaultLines.orders(e, "envelope", hz, p.slip()));
@@ -102,6 +103,19 @@ public final class Vibration {
                                     Optional<ShaftSpeed> shaft, VibrationParams p) {
         Spectrum s = Welch.estimate(x, from, to, sampleRateHz, p.welch());
         return Severity.of(s, unit, shaft, p.table());
+    }
+
+    /**
+     * The envelope spectrum's segment: the user's, or the automatic one shortened to the smallest power of
+     * two spanning one second (bins of at most 1 Hz). Fault lines sit tens of hertz apart, so finer bins
+     * would only trade averages (and a steadier floor) for resolution nobody needs.
+     */
+    static WelchParams envelopeWelch(WelchParams given, int n, double sampleRateHz) {
+        if (given.segmentLength() != 0) {
+            return given;
+        }
+        int oneSecond = Fft.nextPowerOfTwo((int) Math.min(1 << 30, Math.ceil(sampleRateHz)));
+        return new WelchParams(Math.max(WelchParams.MIN_SEGMENT, Math.min(WelchParams.autoSegment(n), oneSecond)));
     }
 
     /** [start, end) of the longest run of {@code x[from, to)} without {@code NaN}. */

@@ -8,6 +8,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Locale;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -24,7 +25,7 @@ class SpectrumCommandTest {
         StringBuilder b = new StringBuilder("time,level\n");
         for (int i = 0; i < 2000; i++) {
             double v = 2 * Math.sin(2 * Math.PI * 0.08 * i) + 0.5 * Math.sin(2 * Math.PI * 0.21 * i);
-            b.append(String.format(java.util.Locale.ROOT, "2026-03-01 %02d:%02d:%02d,%.6f%n", i / 3600,
+            b.append(String.format(Locale.ROOT, "2026-03-01 %02d:%02d:%02d,%.6f%n", i / 3600,
                     i / 60 % 60, i % 60, v));
         }
         log = dir.resolve("slow.csv");
@@ -78,5 +79,35 @@ class SpectrumCommandTest {
         assertEquals(ExitCode.BAD_INPUT, r.status());
         assertEquals("riffle: " + log + ": channel level: segment length 4096 does not fit 2000 samples (at least "
                 + "8 needed)", r.err().strip());
+    }
+
+    /**
+     * End to end on the demo recording (fixtures/demo/README.md: motor 1481 r/min, outer-race impacts at
+     * BPFO 77.01 Hz on channel 1). The demo is our own invention, so this checks the whole path, not the
+     * method: the method's outside checks are in the signal package's tests.
+     */
+    @Test
+    void demoRecordingShowsItsShaftLineAndBpfoInTheEnvelope() {
+        String wav = "fixtures/demo/af2-vibration.wav";
+        MainTest.Run r = MainTest.run("spectrum", wav, "--sensitivity", "50", "--sensitivity-unit", "m/s\u00b2",
+                "--channel", "ch1", "--machine-group", "2", "--support", "rigid", "--bearing", "8,22,100,0");
+        assertEquals(0, r.status(), r.err());
+        assertTrue(r.out().contains("24.68 Hz (1481 r/min), estimated: strongest velocity line"), r.out());
+        String bpfo = r.out().lines().filter(l -> l.startsWith("  BPFO  envelope")).findFirst().orElseThrow();
+        assertTrue(bpfo.matches("  BPFO  envelope +77\\.01 +7[67]\\.\\d+ .* yes"), bpfo);
+        assertTrue(r.out().contains(" of ISO 10816-3/20816-3 group 2, rigid: A/B 1.4, B/C 2.8, C/D 4.5 mm/s "
+                + "(boundaries from memory - verify against the standard)"), r.out());
+        assertTrue(r.out().contains("The machine maker's and the site's limits take precedence over this table."));
+    }
+
+    /** The whole text output and the help, as golden text (STYLE.md §10). */
+    @Test
+    void demoTextAndHelpMatchTheGoldenText() {
+        MainTest.Run r = MainTest.run("spectrum", "fixtures/demo/af2-vibration.wav", "--sensitivity", "50",
+                "--sensitivity-unit", "m/s\u00b2", "--channel", "ch2", "--rpm", "1481", "--machine-group", "2",
+                "--support", "rigid", "--bearing", "8,22,100,0", "--band", "700:830", "--peaks", "5");
+        assertEquals(0, r.status(), r.err());
+        Golden.assertMatches("af2-vibration.spectrum.expected.txt", r.out());
+        Golden.assertMatches("spectrum-help.expected.txt", MainTest.run("spectrum", "--help").out());
     }
 }

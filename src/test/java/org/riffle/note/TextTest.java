@@ -40,7 +40,7 @@ class TextTest {
         assertEquals(List.of("x:"), Text.wrap("   ", 10, "x:", "  "));
     }
 
-    @Property(tries = 300)
+    @Property(tries = 300, seed = "20260314")
     void wrappedLinesFitAndKeepEveryWord(@ForAll @StringLength(max = 200) String raw,
                                          @ForAll @IntRange(min = 8, max = 90) int width) {
         String text = Text.clean(raw).replace('\u00a0', ' ');
@@ -52,7 +52,8 @@ class TextTest {
             }
             joined.append(l.strip());
         }
-        assertEquals(text.replaceAll("\\s+", ""), joined.toString().replaceAll("\\s+", ""));
+        // Unicode white space on both sides: wrap may drop an en quad at a line end just as strip() does.
+        assertEquals(text.replaceAll("(?U)\\s+", ""), joined.toString().replaceAll("(?U)\\s+", ""));
     }
 
     @Test

@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.Optional;
 import java.util.Random;
 import org.junit.jupiter.api.Test;
 import org.riffle.signal.ZoneTable.Group;
@@ -41,7 +42,7 @@ class VibrationTest {
         assertEquals(4.0 / Math.sqrt(2), r.lines().get(0).amplitudeRms(), 0.01 * 4.0 / Math.sqrt(2));
         double want = Math.sqrt((16 + 2.25 + 0.64) / 2);
         assertEquals(want, r.severity().velocityRmsMmS(), 0.01 * want, "RMS of the three lines");
-        assertEquals("speed unknown: taken as at least 600 r/min", Severity.band(java.util.Optional.empty()).how());
+        assertEquals("speed unknown: taken as at least 600 r/min", Severity.band(Optional.empty()).how());
     }
 
     @Test
@@ -56,6 +57,10 @@ class VibrationTest {
                 .findFirst().orElseThrow();
         assertTrue(bpfo.present(), bpfo.toString());
         assertTrue(r.envelopeBand().isPresent() && r.severity().zone().isPresent());
+        assertTrue(r.envelope().orElseThrow().binHz() <= 1, "envelope bins of at most 1 Hz");
+        assertEquals(8192, Vibration.envelopeWelch(WelchParams.auto(), 1 << 20, 5120).segmentLength());
+        assertEquals(2048, Vibration.envelopeWelch(WelchParams.auto(), 10_000, 5120).segmentLength(), "auto less");
+        assertEquals(4096, Vibration.envelopeWelch(new WelchParams(4096), 1 << 20, FS).segmentLength(), "given");
     }
 
     @Test
@@ -79,5 +84,21 @@ class VibrationTest {
                 Unit.parse("g"), VibrationParams.defaults().withRpm(1500).withBearing(EnvelopeTest.BEARING)
                         .withEnvelopeBand(Band.parse("5000:7000"))));
         assertEquals("envelope band 5000-7000 Hz reaches above half the sample rate (6400.0 Hz)", e.getMessage());
+    }
+
+    /** The shaft line is found even when dozens of stronger lines lie above the search range. */
+    @Test
+    void shaftLineIsFoundBelowManyStrongerHighLines() {
+        int n = (int) FS * 8;
+        double[] x = new double[n];
+        for (int i = 0; i < n; i++) {
+            double t = i / FS;
+            x[i] = 0.5 * Math.sin(2 * Math.PI * 31.0 * t);
+            for (int h = 0; h < 80; h++) {
+                x[i] += 5 * Math.sin(2 * Math.PI * (600 + 37.3 * h) * t + h);
+            }
+        }
+        ShaftSpeed s = ShaftSpeed.estimate(Welch.estimate(x, FS, WelchParams.auto())).orElseThrow();
+        assertEquals(31.0, s.hz(), 0.1);
     }
 }

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.Arrays;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.Random;
@@ -11,6 +12,7 @@ import org.junit.jupiter.api.Test;
 import org.riffle.log.Channel;
 import org.riffle.signal.BearingGeometry;
 import org.riffle.signal.VibrationParams;
+import org.riffle.signal.WelchParams;
 import org.riffle.signal.ZoneTable;
 import org.riffle.signal.ZoneTable.Group;
 import org.riffle.signal.ZoneTable.Support;
@@ -85,7 +87,7 @@ class VibrationStepTest {
     @Test
     void aSlowOverallTrendSaysTheRateIsTooLow() {
         float[] x = new float[600];
-        java.util.Arrays.fill(x, 2.0f);
+        Arrays.fill(x, 2.0f);
         VibrationFigures f = VibrationStep.figures(new Channel("vib overall", "mm/s", x), 1.0,
                 Baseline.firstQuarter(600), GROUP2_RIGID).orElseThrow();
         assertTrue(Double.isNaN(f.velocityRmsMmS()));
@@ -108,7 +110,7 @@ class VibrationStepTest {
     @Test
     void settingsThatDoNotFitTheChannelAreARemarkNotAFailure() {
         VibrationFigures f = VibrationStep.figures(new Channel("v", "mm/s", new float[1000]), FS,
-                Baseline.firstQuarter(1000), GROUP2_RIGID.withWelch(new org.riffle.signal.WelchParams(4096)))
+                Baseline.firstQuarter(1000), GROUP2_RIGID.withWelch(new WelchParams(4096)))
                 .orElseThrow();
         assertEquals("not analysed: segment length 4096 does not fit 1000 samples (at least 8 needed)", f.remark());
     }
