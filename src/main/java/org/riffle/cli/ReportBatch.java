@@ -18,16 +18,12 @@ import java.util.stream.Stream;
 import org.riffle.log.LogException;
 import org.riffle.log.LogReader;
 import org.riffle.log.ReadOptions;
-import org.riffle.log.Recording;
 import org.riffle.note.Findings;
 import org.riffle.note.MetricsCsv;
 import org.riffle.note.NoteException;
 import org.riffle.note.NoteSaver;
 import org.riffle.note.NoteWriter;
-import org.riffle.triage.Analyzer;
 import org.riffle.triage.Assessment;
-import org.riffle.triage.TriageListener;
-import org.riffle.triage.TriageParams;
 
 /**
  * {@code riffle report FOLDER...}: every log in the folders (not their subfolders), one worker per
@@ -63,7 +59,7 @@ final class ReportBatch {
                            boolean badInput) {
     }
 
-    int run(List<Path> folders, Path output, Path metrics, TriageParams params, NoteWriter writer,
+    int run(List<Path> folders, Path output, Path metrics, ReportCommand.Judging judging, NoteWriter writer,
             Findings findings) throws LogException {
         List<Path> logs = logsIn(folders);
         Path outDir = output == null ? Path.of("") : output;
@@ -71,8 +67,8 @@ final class ReportBatch {
             err.println("riffle: " + output + ": for folders of logs, -o names an existing folder for the notes");
             return ExitCode.USAGE;
         }
-        int workers = Math.max(1, Math.min(params.threads(), logs.size()));
-        TriageParams one = new TriageParams(params.baselineFrom(), params.baselineTo(), 1);
+        int workers = Math.max(1, Math.min(judging.params().threads(), logs.size()));
+        ReportCommand.Judging one = judging.threads(1);
         ExecutorService pool = Executors.newFixedThreadPool(workers, r -> {
             Thread t = new Thread(r, "riffle-report");
             t.setDaemon(true);
@@ -108,12 +104,10 @@ final class ReportBatch {
         return summarise(outcomes, outDir, metrics);
     }
 
-    private Outcome one(Path log, Path outDir, TriageParams params, NoteWriter writer, Findings findings) {
+    private Outcome one(Path log, Path outDir, ReportCommand.Judging judging, NoteWriter writer, Findings findings) {
         Path asked = outDir.resolve(NoteSaver.defaultName(log.toString()));
         try {
-            Recording rec = LogReader.read(log, ReadOptions.defaults());
-            ReportCommand.checkSpan(params, rec);
-            Assessment a = new Analyzer(params).assess(rec, TriageListener.NONE);
+            Assessment a = judging.assess(LogReader.read(log, ReadOptions.defaults()));
             String note = writer.render(a, findings);
             return new Outcome(log, MetricsCsv.rows(a), asked, NoteSaver.save(asked, note), "", false);
         } catch (LogException e) {

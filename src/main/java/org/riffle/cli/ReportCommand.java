@@ -6,23 +6,28 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.riffle.log.LogException;
 import org.riffle.log.LogReader;
 import org.riffle.log.ReadOptions;
 import org.riffle.log.Recording;
+import org.riffle.note.BaselineStore;
 import org.riffle.note.Findings;
 import org.riffle.note.MetricsCsv;
 import org.riffle.note.NoteException;
 import org.riffle.note.NoteSaver;
 import org.riffle.note.NoteWriter;
+import org.riffle.note.StoredBaseline;
 import org.riffle.triage.Analyzer;
 import org.riffle.triage.Assessment;
 import org.riffle.triage.TriageListener;
 import org.riffle.triage.TriageParams;
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
+import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
@@ -80,6 +85,15 @@ final class ReportCommand implements Callable<Integer> {
             + "(exclusive) of each log instead of the first 25 %.")
     private String baseline;
 
+    @Option(names = "--stored-baseline", arity = "0..1", fallbackValue = "", paramLabel = "ID",
+            description = "Judge against the asset's stored baseline (needs --asset): the one named, "
+                    + "or the newest. See 'riffle baseline'.")
+    private String storedBaseline;
+
+    @Option(names = "--store", paramLabel = "DIR", description = "The baseline folder (default: "
+            + "$RIFFLE_BASELINE_DIR, else $XDG_DATA_HOME/riffle/baselines).")
+    private Path store;
+
     @Option(names = "--ascii", description = "Write the note in ASCII only even when the locale says UTF-8.")
     private boolean ascii;
 
@@ -105,23 +119,59 @@ final class ReportCommand implements Callable<Integer> {
         Findings findings = new Findings(site, asset, point, technician, conditions, Map.of(), comment);
         long folders = logs.stream().filter(Files::isDirectory).count();
         if (folders > 0 && folders < logs.size()) {
-            throw new picocli.CommandLine.ParameterException(spec.commandLine(),
-                    "give either log files or folders of logs, not both");
+            throw new ParameterException(spec.commandLine(), "give either log files or folders of logs, not both");
+        }
+        Judging judging = new Judging(params, null, null);
+        if (storedBaseline != null) {
+            if (asset.isBlank()) {
+                throw new ParameterException(spec.commandLine(), "--stored-baseline needs --asset ID");
+            }
+            BaselineStore s = BaselineCommand.store(store, env);
+            try {
+                StoredBaseline b = s.find(asset, storedBaseline.isEmpty() ? Optional.empty()
+                        : Optional.of(storedBaseline));
+                judging = new Judging(params, s, b);
+                writer = writer.withStoredBaseline(b);
+            } catch (NoteException e) {
+                spec.commandLine().getErr().println("riffle: " + e.getMessage());
+                return ExitCode.BAD_INPUT;
+            }
         }
         if (folders > 0) {
             return new ReportBatch(spec.commandLine().getOut(), spec.commandLine().getErr(), env)
-                    .run(logs, output, metrics, params, writer, findings);
+                    .run(logs, output, metrics, judging, writer, findings);
         }
-        return single(params, writer, findings);
+        return single(judging, writer, findings);
     }
 
-    private int single(TriageParams params, NoteWriter writer, Findings findings) throws LogException {
-        List<Assessment> all = new ArrayList<>();
-        Analyzer analyzer = new Analyzer(params);
-        for (Path log : logs) {
-            Recording rec = LogReader.read(log, ReadOptions.defaults());
+    /**
+     * How each log is judged: against rows of itself ({@code stored} null), or against a stored
+     * baseline, which is checked against every log before use. Immutable.
+     */
+    record Judging(TriageParams params, BaselineStore store, StoredBaseline stored) {
+        /** The same judging on {@code n} threads. */
+        Judging threads(int n) {
+            return new Judging(params.withThreads(n), store, stored);
+        }
+
+        Assessment assess(Recording rec) throws LogException {
             checkSpan(params, rec);
-            all.add(analyzer.assess(rec, TriageListener.NONE));
+            Analyzer analyzer = new Analyzer(params);
+            if (stored == null) {
+                return analyzer.assess(rec, TriageListener.NONE);
+            }
+            try {
+                return analyzer.assess(rec, store.load(stored, rec), TriageListener.NONE);
+            } catch (NoteException e) {
+                throw new LogException((String) null, 0, 0, e.getMessage());
+            }
+        }
+    }
+
+    private int single(Judging judging, NoteWriter writer, Findings findings) throws LogException {
+        List<Assessment> all = new ArrayList<>();
+        for (Path log : logs) {
+            all.add(judging.assess(LogReader.read(log, ReadOptions.defaults())));
         }
         String note = writer.render(all, findings);
         PrintWriter out = spec.commandLine().getOut();
@@ -184,7 +234,15 @@ final class ReportCommand implements Callable<Integer> {
         if (baseline == null) {
             return new int[] {-1, -1};
         }
-        String[] ab = baseline.split(":", -1);
+        if (storedBaseline != null) {
+            throw new ParameterException(spec.commandLine(), "--baseline and --stored-baseline exclude each other");
+        }
+        return parseSpan(spec.commandLine(), "--baseline", baseline);
+    }
+
+    /** Rows {@code A:B} with {@code 0 <= A < B}, or a usage error naming {@code option}. */
+    static int[] parseSpan(CommandLine cl, String option, String text) {
+        String[] ab = text.split(":", -1);
         try {
             if (ab.length == 2) {
                 int a = Integer.parseInt(ab[0].trim());
@@ -196,7 +254,6 @@ final class ReportCommand implements Callable<Integer> {
         } catch (NumberFormatException e) {
             // fall through to the usage message
         }
-        throw new picocli.CommandLine.ParameterException(spec.commandLine(), "--baseline '" + baseline
-                + "' must be A:B with whole row numbers 0 <= A < B");
+        throw new ParameterException(cl, option + " '" + text + "' must be A:B with whole row numbers 0 <= A < B");
     }
 }

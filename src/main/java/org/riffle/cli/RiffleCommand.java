@@ -25,9 +25,11 @@ import picocli.CommandLine.Spec;
             SpectrumCommand.class,
             OpenCommand.class,
             ReportCommand.class,
+            BaselineCommand.class,
             DemoCommand.class,
             RqaCommand.class,
             TrendCommand.class,
+            HealthCommand.class,
         })
 final class RiffleCommand implements Callable<Integer> {
     @Spec

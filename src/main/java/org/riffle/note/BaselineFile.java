@@ -1,9 +1,13 @@
 package org.riffle.note;
 
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
 import java.time.Instant;
 import java.time.format.DateTimeParseException;
 import java.util.ArrayList;
+import java.util.HexFormat;
 import java.util.List;
 import java.util.function.Consumer;
 
@@ -42,10 +46,19 @@ final class BaselineFile {
 
     static String write(String asset, Instant saved, String riffleVersion, String source, FileDigest digest,
                         String span, List<String> channels, Consumer<KeyLines> body) {
+        KeyLines b = new KeyLines(KIND, VERSION);
+        body.accept(b);
+        String bodyText = b.finish();
+        List<KeyLines.Entry> bodyEntries;
+        try {
+            bodyEntries = KeyLines.parse(null, bodyText, KIND).entries();
+        } catch (NoteException e) {
+            throw new IllegalStateException("riffle wrote a body it cannot read: " + e.getMessage(), e);
+        }
         KeyLines k = new KeyLines(KIND, VERSION)
                 .comment("A healthy baseline riffle learned for one asset; judge later logs against it with")
                 .comment("  riffle report LOG --asset " + asset.replaceAll("\\s", "_") + " --stored-baseline")
-                .comment("Plain text for reading; riffle refuses a copy that was changed by hand.")
+                .comment("Plain text for reading. The body's checksum is checked: a copy changed by hand is refused.")
                 .text("asset", asset)
                 .raw("saved", saved.toString())
                 .text("riffle", riffleVersion)
@@ -56,9 +69,34 @@ final class BaselineFile {
         for (String c : channels) {
             k.text("channel", c);
         }
-        k.blank();
-        body.accept(k);
-        return k.finish();
+        k.raw("body-sha256", bodyDigest(bodyEntries));
+        String head = k.finish();
+        String rest = bodyText.substring(bodyText.indexOf('\n') + 1);
+        return head.substring(0, head.length() - "end\n".length()) + "\n" + rest;
+    }
+
+    /** SHA-256 of the body's entries ({@code key: value} lines from the first body key on). */
+    static String bodyDigest(List<KeyLines.Entry> entries) {
+        try {
+            MessageDigest md = MessageDigest.getInstance("SHA-256");
+            for (KeyLines.Entry e : entries) {
+                md.update((e.key() + ": " + e.raw() + "\n").getBytes(StandardCharsets.UTF_8));
+            }
+            return HexFormat.of().formatHex(md.digest());
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("SHA-256 is required of every Java platform", e);
+        }
+    }
+
+    /** Refuses a file whose body does not match the checksum in its header. */
+    static void checkBody(Path file, KeyLines.Parsed p) throws NoteException {
+        KeyLines.Entry sum = p.one(file, "body-sha256");
+        List<KeyLines.Entry> all = p.entries();
+        int first = all.indexOf(sum) + 1;
+        if (!bodyDigest(all.subList(first, all.size())).equals(sum.raw())) {
+            throw new NoteException(file, "was changed after it was saved (its body does not match the checksum"
+                    + " on line " + sum.line() + "); save the baseline again from its log");
+        }
     }
 
     /** The header of a parsed file, after checking its format version. */

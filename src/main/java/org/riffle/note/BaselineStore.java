@@ -18,6 +18,10 @@ import java.util.Objects;
 import java.util.Optional;
 import java.util.function.Consumer;
 import java.util.stream.Stream;
+import org.riffle.log.Channel;
+import org.riffle.log.Recording;
+import org.riffle.triage.Baseline;
+import org.riffle.triage.BaselineModel;
 
 /**
  * Baselines kept between visits: one plain-text file per saved baseline, under
@@ -70,6 +74,53 @@ public final class BaselineStore {
     }
 
     /**
+     * Stores {@code model}, learned from {@code source}, as a new baseline of {@code asset}.
+     *
+     * @return its header as stored
+     * @throws NoteException when the store cannot be written or the log read for its digest
+     */
+    public StoredBaseline save(String asset, BaselineModel model, Path source) throws NoteException {
+        List<String> names = model.channels().stream().map(BaselineModel.ChannelModel::name).toList();
+        return save(asset, NoteWriter.version(), source, model.baseline().description(), names,
+                k -> BaselineCodec.write(model, k));
+    }
+
+    /**
+     * The model stored as {@code b}, after checking that it is intact (its body checksum), of this
+     * format version, of its asset, and for exactly the channels of {@code judged} with the same units.
+     * Its span is marked as rows of another log ({@link #asStored}).
+     *
+     * @throws NoteException naming the file and what is wrong; nothing is ever used silently
+     */
+    public BaselineModel load(StoredBaseline b, Recording judged) throws NoteException {
+        List<String> names = judged.channels().stream().map(Channel::name).toList();
+        KeyLines.Parsed p = open(b, names);
+        BaselineFile.checkBody(b.path(), p);
+        BaselineModel m = BaselineCodec.read(b.path(), p);
+        for (Channel c : judged.channels()) {
+            String unit = m.channel(c.name()).map(BaselineModel.ChannelModel::unit).orElse(c.unit());
+            if (!unit.equals(c.unit())) {
+                throw new NoteException(b.path(), "baseline " + b.id() + " has channel '" + Text.clean(c.name())
+                        + "' in '" + Text.clean(unit) + "' but this log has it in '" + Text.clean(c.unit())
+                        + "'; save a baseline from a log with the same units");
+            }
+        }
+        return asStored(m, b);
+    }
+
+    /**
+     * {@code m} as seen from a later log: its span is rows of the log it was learned from, not of the
+     * log being judged, so the span is marked as another log's and named with the stored baseline.
+     */
+    static BaselineModel asStored(BaselineModel m, StoredBaseline b) {
+        Baseline span = m.baseline();
+        String description = span.description() + " of " + Sources.fileName(b.sourceFile()) + " (stored baseline "
+                + b.id() + ")";
+        return new BaselineModel(m.source(), new Baseline(span.fromRow(), span.toRow(), description, false),
+                m.window(), m.step(), m.quantile(), m.sustained(), m.channels());
+    }
+
+    /**
      * Writes a new baseline file for {@code asset}: the header from the arguments, then {@code body}.
      *
      * @return its header as stored
@@ -85,7 +136,7 @@ public final class BaselineStore {
         } catch (IOException e) {
             throw new NoteException(source, "cannot read the log to record its SHA-256 (" + e.getMessage() + ")", e);
         }
-        java.time.Instant now = clock.instant();
+        java.time.Instant now = clock.instant().truncatedTo(java.time.temporal.ChronoUnit.SECONDS);
         String text = BaselineFile.write(asset, now, riffleVersion, source.toString(), digest, span, channels, body);
         Path dir = root.resolve(folderFor(asset));
         Path first = dir.resolve(ID.format(now) + SUFFIX);

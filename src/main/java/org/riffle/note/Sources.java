@@ -38,7 +38,8 @@ final class Sources {
         p.heading("BASELINE");
         for (Assessment a : all) {
             String label = all.size() > 1 ? fileName(a.recording().source().file()) : "Judged against";
-            p.field(2, LABEL + 6, label, a.baseline().description());
+            p.field(2, LABEL + 6, label, a.baseline().description() + (a.baseline().sameLog() ? "" : "; not rows"
+                    + " of this log"));
         }
         stored.ifPresent(b -> {
             p.field(2, LABEL + 6, "Stored baseline", b.id() + " of asset " + b.asset());

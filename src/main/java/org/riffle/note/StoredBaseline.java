@@ -33,4 +33,15 @@ public record StoredBaseline(String asset, String id, Instant saved, String riff
         Objects.requireNonNull(path, "path");
         channels = List.copyOf(channels);
     }
+
+    /**
+     * Four lines for a listing, with everything that came from input neutralised: asset, id, date and
+     * riffle version; source log and span; its SHA-256; the channels.
+     */
+    public List<String> describe() {
+        return List.of(Text.clean(asset) + "  " + id + "  saved " + saved + "  riffle " + Text.clean(riffleVersion),
+                "    from " + Text.clean(sourceFile) + ", " + Text.clean(span),
+                "    SHA-256 " + sourceSha256,
+                "    channels: " + Text.clean(String.join(", ", channels)));
+    }
 }

@@ -109,17 +109,7 @@ final class LineScan {
         int j0 = jStart & ~63;
         java.util.Arrays.fill(cur, ws, j0 >>> 6, 0L);
         for (int blk = j0; blk < n; blk += BLOCK) {
-            int end = Math.min(n, blk + BLOCK);
-            seg.distances(i, blk, end, buf);
-            int len = end - blk;
-            for (int q0 = 0; q0 < len; q0 += 64) {
-                int lim = Math.min(64, len - q0);
-                long bits = 0;
-                for (int t = 0; t < lim; t++) {
-                    bits |= ((Double.doubleToRawLongBits(buf[q0 + t]) - tb1) >>> 63) << t;
-                }
-                cur[(blk + q0) >>> 6] = bits;
-            }
+            seg.recurrenceBits(i, blk, Math.min(n, blk + BLOCK), buf, tb1, cur);
         }
         cur[j0 >>> 6] &= -1L << (jStart & 63);
         java.util.Arrays.fill(cur, ((n - 1) >>> 6) + 1, words, 0L);

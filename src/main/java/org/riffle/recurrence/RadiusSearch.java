@@ -24,10 +24,11 @@ final class RadiusSearch {
     /**
      * The search's budget: triangles of at most {@code collectAll} cells are collected whole; at most
      * {@code collectCap} values (8 bytes each) are collected in a pass; the sample holds about
-     * {@code sample} values; a histogram has {@code bins} bins.
+     * {@code sample} values at most (and at most 1/64 of the triangle when that is more than 4096); a
+     * histogram has {@code bins} bins.
      */
     record Budget(long collectAll, long collectCap, int sample, int bins) {
-        static final Budget DEFAULT = new Budget(1L << 21, 1L << 22, 1 << 18, 4096);
+        static final Budget DEFAULT = new Budget(1L << 16, 1L << 22, 1 << 18, 4096);
     }
 
     private RadiusSearch() {
@@ -75,7 +76,8 @@ final class RadiusSearch {
 
     private static long[] sampleBracket(List<List<Piece>> tasks, int theiler, long rank, long upperTotal,
                                         int threads, int sampleSize) {
-        long stride = Math.max(1, upperTotal / sampleSize);
+        long wanted = Math.min(sampleSize, Math.max(4096, upperTotal / 64));
+        long stride = Math.max(1, upperTotal / wanted);
         List<Callable<long[]>> jobs = new ArrayList<>();
         long rowIndex = 0;
         for (List<Piece> t : tasks) {

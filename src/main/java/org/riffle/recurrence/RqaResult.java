@@ -64,10 +64,4 @@ public record RqaResult(RqaParams params, int from, int to, int vectors, double 
     public boolean computed() {
         return skipped.isEmpty();
     }
-
-    /** The same result with the radius and estimate of a shared baseline recorded. */
-    RqaResult withEstimate(Optional<EmbeddingEstimate> e) {
-        return new RqaResult(params, from, to, vectors, radius, recurrent, eligible, rr, det, l, lmax, div, entr,
-                lam, tt, vmax, e, skipped);
-    }
 }

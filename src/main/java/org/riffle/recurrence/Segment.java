@@ -63,34 +63,71 @@ final class Segment {
 
     /** Fills {@code buf[0, j1 − j0)} with the distance values from vector i to vectors j0 … j1 − 1. */
     void distances(int i, int j0, int j1, double[] buf) {
+        partial(i, j0, j1, m, buf);
+    }
+
+    /**
+     * Sets, in {@code words}, the bit of every j in [j0, j1) whose distance value to vector i is ≤ the
+     * threshold whose raw bits plus one are {@code tb1} (j0 a multiple of 64; bits at and past j1 of the
+     * last word stay 0). The last coordinate is added and compared in one pass, word by word, with the
+     * same arithmetic as {@link #distances}; {@code buf} holds the partial sums.
+     */
+    void recurrenceBits(int i, int j0, int j1, double[] buf, long tb1, long[] words) {
+        int len = j1 - j0;
+        int last = m - 1;
+        if (last > 0) {
+            partial(i, j0, j1, last, buf);
+        }
+        int off = last * tau;
+        double b = s[i + off];
+        int base = j0 + off;
+        for (int q0 = 0; q0 < len; q0 += 64) {
+            int lim = Math.min(64, len - q0);
+            long bits = 0;
+            for (int t = 0; t < lim; t++) {
+                int q = q0 + t;
+                double d = b - s[base + q];
+                double v;
+                if (max) {
+                    d = Math.abs(d);
+                    v = last == 0 || d > buf[q] ? d : buf[q];
+                } else {
+                    v = last == 0 ? d * d : buf[q] + d * d;
+                }
+                bits |= ((Double.doubleToRawLongBits(v) - tb1) >>> 63) << t;
+            }
+            words[(j0 + q0) >>> 6] = bits;
+        }
+    }
+
+    /** {@code buf[0, j1 − j0)} = distance values over the first {@code coords} coordinates. */
+    private void partial(int i, int j0, int j1, int coords, double[] buf) {
         int len = j1 - j0;
         double a = s[i];
         if (max) {
             for (int q = 0; q < len; q++) {
                 buf[q] = Math.abs(a - s[j0 + q]);
             }
-            for (int k = 1; k < m; k++) {
-                int off = k * tau;
-                double b = s[i + off];
-                int base = j0 + off;
+        } else {
+            for (int q = 0; q < len; q++) {
+                double d = a - s[j0 + q];
+                buf[q] = d * d;
+            }
+        }
+        for (int k = 1; k < coords; k++) {
+            int off = k * tau;
+            double b = s[i + off];
+            int base = j0 + off;
+            if (max) {
                 for (int q = 0; q < len; q++) {
                     double d = Math.abs(b - s[base + q]);
                     buf[q] = d > buf[q] ? d : buf[q];
                 }
-            }
-            return;
-        }
-        for (int q = 0; q < len; q++) {
-            double d = a - s[j0 + q];
-            buf[q] = d * d;
-        }
-        for (int k = 1; k < m; k++) {
-            int off = k * tau;
-            double b = s[i + off];
-            int base = j0 + off;
-            for (int q = 0; q < len; q++) {
-                double d = b - s[base + q];
-                buf[q] += d * d;
+            } else {
+                for (int q = 0; q < len; q++) {
+                    double d = b - s[base + q];
+                    buf[q] += d * d;
+                }
             }
         }
     }

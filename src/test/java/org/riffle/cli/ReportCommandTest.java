@@ -109,7 +109,8 @@ class ReportCommandTest {
             StringWriter err = new StringWriter();
             Path o = Files.createDirectory(dir.resolve("o" + terminal));
             int status = new ReportBatch(new PrintWriter(out), new PrintWriter(err), terminal).run(List.of(logs), o,
-                    null, new TriageParams(-1, -1, 2), NoteWriter.standard(), Findings.EMPTY);
+                    null, new ReportCommand.Judging(new TriageParams(-1, -1, 2), null, null), NoteWriter.standard(),
+                    Findings.EMPTY);
             assertEquals(0, status, err.toString());
             assertEquals(terminal, err.toString().contains("\rriffle report: 2 of 2 logs done"), err.toString());
             assertEquals(terminal, !err.toString().isEmpty(), "nothing on a non-terminal: '" + err + "'");

@@ -24,6 +24,7 @@ public final class DraftChild {
         Findings typed = typed(log, text);
         if (args[4].equals("churn")) {
             Findings other = typed.withGeneral("the other version");
+            store.save(log, other);
             System.out.println("typed");
             System.out.flush();
             for (long i = 0; ; i++) {
