@@ -29,6 +29,7 @@ import picocli.CommandLine.Spec;
             DemoCommand.class,
             RqaCommand.class,
             TrendCommand.class,
+            HealthCommand.class,
         })
 final class RiffleCommand implements Callable<Integer> {
     @Spec

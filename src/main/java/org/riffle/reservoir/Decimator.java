@@ -5,9 +5,10 @@ package org.riffle.reservoir;
  * to reach its first zero) is low-pass filtered and kept every D-th sample, so that one-step prediction
  * is a test of the dynamics and not of smoothness, and long high-rate records cost less.
  *
- * <p>Rate rule: D = ⌊z / 4⌋, where z is the lag of the first zero crossing of the baseline's
+ * <p>Rate rule: D = ⌊z / 8⌋, where z is the lag of the first zero crossing of the baseline's
  * autocorrelation (a quarter period for an oscillation), clamped to [1, {@code maxFactor}]; after
- * decimation the first zero sits near lag 4. Filter: a linear-phase FIR, a Blackman-windowed sinc with
+ * decimation the first zero sits near lag 8 (an oscillation keeps at least 32 samples a period, so
+ * its harmonics and impulsive content stay below the new Nyquist frequency). Filter: a linear-phase FIR, a Blackman-windowed sinc with
  * cut-off 0.4/D cycles per sample and 24·D + 1 taps (Oppenheim &amp; Schafer, Discrete-Time Signal
  * Processing, 3rd ed. 2010, sections 7.5 and 4.6: window method and downsampling), centred, so output k
  * stands for input sample k·D. Taps beyond the ends are left out and the rest renormalised to unit
@@ -23,8 +24,8 @@ public final class Decimator {
     }
 
     /**
-     * The decimation factor for a channel whose baseline is {@code x[from, to)}: ⌊z/4⌋ clamped to
-     * [1, maxFactor], z the first zero crossing of the autocorrelation (searched up to 4·maxFactor + 4
+     * The decimation factor for a channel whose baseline is {@code x[from, to)}: ⌊z/8⌋ clamped to
+     * [1, maxFactor], z the first zero crossing of the autocorrelation (searched up to 8·maxFactor + 8
      * lags on at most the first 20,000 baseline samples; missing samples count as the mean).
      */
     public static int factor(double[] x, int from, int to, int maxFactor) {
@@ -44,7 +45,7 @@ public final class Decimator {
             return 1;
         }
         mean /= n;
-        int maxLag = Math.min(4 * maxFactor + 4, (end - from) / 2);
+        int maxLag = Math.min(8 * maxFactor + 8, (end - from) / 2);
         for (int lag = 1; lag <= maxLag; lag++) {
             double r = 0;
             for (int i = from; i + lag < end; i++) {
@@ -55,7 +56,7 @@ public final class Decimator {
                 }
             }
             if (r <= 0) {
-                return Math.max(1, Math.min(maxFactor, lag / 4));
+                return Math.max(1, Math.min(maxFactor, lag / 8));
             }
         }
         return maxFactor;

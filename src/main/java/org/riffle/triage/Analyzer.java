@@ -13,6 +13,7 @@ import java.util.concurrent.FutureTask;
 import org.riffle.log.Channel;
 import org.riffle.log.Recording;
 import org.riffle.log.TimeIssue;
+import org.riffle.recurrence.RqaParams;
 import org.riffle.signal.Summary;
 import org.riffle.signal.VibrationParams;
 import org.riffle.triage.BaselineModel.ChannelModel;
@@ -91,7 +92,7 @@ public final class Analyzer {
             return m;
         });
         return new BaselineModel(shell.source(), baseline, shell.window(), shell.step(), shell.quantile(),
-                shell.sustained(), models);
+                shell.sustained(), models, shell.rqaNorm(), shell.minLine(), shell.minVert(), shell.theiler());
     }
 
     /** Learns from {@code baseline} rows of {@code recording} without progress reports. */
@@ -143,8 +144,9 @@ public final class Analyzer {
         int rows = baseline.toRow() - baseline.fromRow();
         String source = baseline.sameLog() ? baseline.description() + " of " + fileName(recording)
                 : baseline.description();
+        RqaParams r = params.rqa();
         return new BaselineModel(source, baseline, params.windowFor(rows), params.stepFor(rows), params.quantile(),
-                params.sustained(), List.of());
+                params.sustained(), List.of(), r.norm().word(), r.minLine(), r.minVert(), r.theiler());
     }
 
     private static String fileName(Recording r) {

@@ -4,6 +4,7 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
+import org.riffle.recurrence.RqaParams;
 
 /**
  * Everything learned from a healthy baseline, per channel, as plain values (numbers, text, arrays of
@@ -21,16 +22,48 @@ import java.util.Optional;
  * @param quantile calibration quantile
  * @param sustained windows in a row that make a departure sustained
  * @param channels one model per numeric channel of the baseline log, in its order
+ * @param rqaNorm RQA distance: {@code "euclidean"} or {@code "max"}
+ * @param minLine RQA l_min
+ * @param minVert RQA v_min
+ * @param theiler RQA Theiler window
  */
 public record BaselineModel(String source, Baseline baseline, int window, int step, double quantile, int sustained,
-                            List<ChannelModel> channels) {
+                            List<ChannelModel> channels, String rqaNorm, int minLine, int minVert, int theiler) {
     public BaselineModel {
         Objects.requireNonNull(source, "source");
         Objects.requireNonNull(baseline, "baseline");
+        Objects.requireNonNull(rqaNorm, "rqaNorm");
         channels = List.copyOf(channels);
-        if (window < 8 || step < 1 || step > window) {
+        if (window < 2 || step < 1 || step > window) {
             throw new IllegalArgumentException("window " + window + " and step " + step + " do not make a trend");
         }
+        rqaSettings(rqaNorm, minLine, minVert, theiler);
+    }
+
+    /** A model with riffle's default RQA line and norm settings. */
+    public BaselineModel(String source, Baseline baseline, int window, int step, double quantile, int sustained,
+                         List<ChannelModel> channels) {
+        this(source, baseline, window, step, quantile, sustained, channels,
+                RqaParams.defaults().norm().word(), RqaParams.defaults().minLine(), RqaParams.defaults().minVert(),
+                RqaParams.defaults().theiler());
+    }
+
+    /** The RQA settings of this model (embedding and threshold are per channel). */
+    RqaParams rqa() {
+        return rqaSettings(rqaNorm, minLine, minVert, theiler);
+    }
+
+    private static RqaParams rqaSettings(String norm, int minLine, int minVert, int theiler) {
+        RqaParams.Norm n = null;
+        for (RqaParams.Norm candidate : RqaParams.Norm.values()) {
+            if (candidate.word().equals(norm)) {
+                n = candidate;
+            }
+        }
+        if (n == null) {
+            throw new IllegalArgumentException("RQA norm '" + norm + "' is not one riffle knows");
+        }
+        return RqaParams.defaults().withNorm(n).withMinLines(minLine, minVert).withTheiler(theiler);
     }
 
     /** The model of the channel named {@code name} (exact match). */
@@ -151,7 +184,7 @@ public record BaselineModel(String source, Baseline baseline, int window, int st
      * One measure's distribution over the baseline windows.
      *
      * @param name measure name ({@code "novelty"}, {@code "RR"}, {@code "DET"}, {@code "LAM"},
-     *     {@code "mean"}, {@code "std"})
+     *     {@code "mean"}, {@code "std"}, {@code "kurtosis"})
      * @param center median of the baseline windows (of the logarithm for {@code novelty})
      * @param spread robust spread: 1.4826 × median absolute deviation, floored (see README)
      * @param values the baseline windows' values, in window order

@@ -16,8 +16,9 @@ import org.riffle.triage.BaselineModel.MeasureModel;
 import org.riffle.triage.BaselineModel.ReservoirModel;
 
 /**
- * Learning one channel's baseline and judging the channel against it. Stateless; each call works on its
- * own copies of the samples.
+ * Learning one channel's baseline and judging the channel against it. The trend windows are one grid
+ * from sample 0 ({@code k·step}); the baseline windows are the grid's windows that lie inside the
+ * baseline rows. Stateless; each call works on its own copies of the samples.
  */
 final class ChannelWork {
     /** Largest share of missing samples a channel (or its baseline) may have and still be judged. */
@@ -25,7 +26,9 @@ final class ChannelWork {
     /** Fewest baseline windows to calibrate on. */
     static final int MIN_BASELINE_WINDOWS = 8;
     /** The measures, in the order of {@link BaselineModel.ChannelModel#measures()}. */
-    static final List<String> NAMES = List.of("novelty", "RR", "DET", "LAM", "mean", "std");
+    static final List<String> NAMES = List.of("novelty", "RR", "DET", "LAM", "mean", "std", "kurtosis");
+    /** Index of each measure's values in the recurrence rows of {@link RqaStep}: RR, DET, LAM. */
+    private static final int[] RQA_ROW = {0, 1, 5};
 
     private ChannelWork() {
     }
@@ -34,41 +37,47 @@ final class ChannelWork {
     static ChannelModel learn(Channel c, int from, int to, boolean[] resets, double rateHz, TriageParams p,
                               int window, int step, DoubleConsumer progress) {
         int n = to - from;
-        double[] base = new double[n];
-        c.copyTo(base, from, to);
+        double[] x = c.toDoubles();
+        double[] base = Arrays.copyOfRange(x, from, to);
         Summary s = Summary.of(base);
+        Windows w = new Windows(n, window, step, Math.floorMod(-from, step));
         String problem = problem(s, n, "baseline");
-        Windows w = new Windows(n, window, step);
         if (problem.isEmpty() && w.count() < MIN_BASELINE_WINDOWS) {
             problem = String.format(Locale.ROOT, "too short: the baseline (%d samples) holds %d windows of %d"
                     + " samples, at least %d are needed", n, w.count(), window, MIN_BASELINE_WINDOWS);
         }
+        RqaStep.Outcome outcome = RqaStep.learn(x, from, to, window, step, p.rqa());
+        Optional<RqaStep.Learned> rqa = outcome.learned();
         if (!problem.isEmpty()) {
-            return ChannelModel.none(c.name(), c.unit(), problem);
+            // no judgement, but the recurrence trend can still be shown with the baseline's ε
+            return new ChannelModel(c.name(), c.unit(), problem, s.mean(), s.std(), 1, rateHz,
+                    rqa.map(RqaStep.Learned::dimension).orElse(0), rqa.map(RqaStep.Learned::delay).orElse(0),
+                    rqa.map(RqaStep.Learned::radius).orElse(Double.NaN),
+                    rqa.map(RqaStep.Learned::settings).orElse(""), Optional.empty(), List.of(), Double.NaN, List.of());
         }
         List<String> notes = new ArrayList<>();
+        if (rqa.isEmpty()) {
+            notes.add(outcome.reason());
+        }
         int d = NoveltyStep.factorFor(base, window);
         boolean[] baseResets = resets == null ? null : Arrays.copyOfRange(resets, from, to);
         double[] u = Decimator.decimate(NoveltyStep.normalise(base, s.mean(), s.std(), baseResets), d);
         NoveltyStep.Learned nov = NoveltyStep.learn(u, p.reservoir(), p.search(), progress);
-        double[][] values = new double[NAMES.size()][];
-        values[0] = nov.model().map(m -> w.novelty(nov.heldOutErrors(), d, 0, m.heldOutMse()))
-                .orElse(nans(w.count()));
         if (!nov.reason().isEmpty()) {
             notes.add(nov.reason());
         }
-        RqaStep.Outcome outcome = RqaStep.learn(base, w);
-        Optional<RqaStep.Learned> rqa = outcome.learned();
-        if (rqa.isEmpty()) {
-            notes.add(outcome.reason());
+        double[][] values = new double[NAMES.size()][];
+        values[0] = nov.model().map(m -> w.novelty(nov.heldOutErrors(), d, 0, m.heldOutMse()))
+                .orElse(nans(w.count()));
+        for (int k = 0; k < RQA_ROW.length; k++) {
+            int row = RQA_ROW[k];
+            values[1 + k] = rqa.map(r -> r.baselineValues()[row]).orElse(nans(w.count()));
         }
-        values[1] = rqa.map(r -> r.baselineValues()[0]).orElse(nans(w.count()));
-        values[2] = rqa.map(r -> r.baselineValues()[1]).orElse(nans(w.count()));
-        values[3] = rqa.map(r -> r.baselineValues()[5]).orElse(nans(w.count()));
         values[4] = w.means(base, 0);
         values[5] = w.stds(base, 0, values[4]);
+        values[6] = w.kurtoses(base, 0, values[4]);
         MeasureModel[] models = new MeasureModel[NAMES.size()];
-        double[] floors = {0.02, 0.01, 0.02, 0.02, 1e-3 * s.std(), 1e-3 * s.std()};
+        double[] floors = {0.02, 0.01, 0.05, 0.05, 1e-3 * s.std(), 1e-3 * s.std(), 0.1};
         int present = 0;
         for (int k = 0; k < models.length; k++) {
             models[k] = Judge.model(NAMES.get(k), values[k], floors[k]);
@@ -102,22 +111,26 @@ final class ChannelWork {
     static ChannelAssessment assess(Channel c, ChannelModel m, BaselineModel bm, Baseline b, TimeBase time,
                                     boolean[] resets, Summary stats, Optional<VibrationFigures> vibration) {
         List<Param> params = Reporting.channelParams(m, bm, time);
-        if (!m.learned()) {
-            return noEstimate(c, stats, vibration, params, m.noEstimateReason());
-        }
         int n = c.size();
         double[] x = c.toDoubles();
-        String problem = problem(stats, n, "channel");
         Windows w = new Windows(n, bm.window(), bm.step());
+        double[][] rqa = m.embeddingDimension() > 0
+                ? RqaStep.trend(x, w, bm.rqa(), m.embeddingDimension(), m.embeddingDelay(), m.rqaRadius())
+                : null;
+        String problem = m.learned() ? problem(stats, n, "channel") : m.noEstimateReason();
         if (problem.isEmpty() && w.count() == 0) {
             problem = "too short: " + n + " samples, one window is " + bm.window();
         }
         if (!problem.isEmpty()) {
-            return noEstimate(c, stats, vibration, params, problem);
+            double[] means = w.means(x, 0);
+            double[][] plain = {nans(w.count()), null, null, null, means, w.stds(x, 0, means), null};
+            List<WindowRow> rows = new ArrayList<>(w.count());
+            for (int k = 0; k < w.count(); k++) {
+                rows.add(Reporting.row(w, k, time, plain, rqa, Double.NaN, null));
+            }
+            return new ChannelAssessment(c.name(), c.unit(), stats, vibration, List.of(), rows,
+                    Health.none(problem), params, List.of(), true);
         }
-        double[][] rqa = m.embeddingDimension() > 0
-                ? RqaStep.trend(x, w, m.embeddingDimension(), m.embeddingDelay(), m.rqaRadius())
-                : null;
         double[][] values = values(x, w, m, resets, rqa);
         MeasureModel[] models = m.measures().toArray(new MeasureModel[0]);
         double[] scores = Judge.scores(models, values);
@@ -136,12 +149,6 @@ final class ChannelWork {
                 m.notes(), true);
     }
 
-    private static ChannelAssessment noEstimate(Channel c, Summary stats, Optional<VibrationFigures> vibration,
-                                                List<Param> params, String reason) {
-        return new ChannelAssessment(c.name(), c.unit(), stats, vibration, List.of(), List.of(),
-                Health.none(reason), params, List.of(), true);
-    }
-
     /**
      * Every measure per window of the whole channel: [measure][window] in {@link #NAMES} order, the
      * recurrence ones taken from {@code rqa} (null when not computed).
@@ -155,11 +162,12 @@ final class ChannelWork {
             double[] u = Decimator.decimate(NoveltyStep.normalise(x, m.mean(), m.std(), resets), m.decimation());
             v[0] = w.novelty(esn.oneStepErrors(u), m.decimation(), 0, r.heldOutMse());
         }
-        v[1] = rqa == null ? nans(w.count()) : rqa[0];
-        v[2] = rqa == null ? nans(w.count()) : rqa[1];
-        v[3] = rqa == null ? nans(w.count()) : rqa[5];
+        for (int k = 0; k < RQA_ROW.length; k++) {
+            v[1 + k] = rqa == null ? nans(w.count()) : rqa[RQA_ROW[k]];
+        }
         v[4] = w.means(x, 0);
         v[5] = w.stds(x, 0, v[4]);
+        v[6] = w.kurtoses(x, 0, v[4]);
         return v;
     }
 

@@ -37,6 +37,9 @@ final class Reporting {
     static List<Param> channelParams(ChannelModel m, BaselineModel bm, TimeBase time) {
         List<Param> p = new ArrayList<>();
         if (!m.learned()) {
+            if (m.embeddingDimension() > 0) {
+                p.add(new Param("recurrence", m.rqaSettings()));
+            }
             return p;
         }
         String rate = time.isIndexed() ? (m.decimation() == 1 ? "every sample" : "every " + m.decimation()
@@ -50,10 +53,7 @@ final class Reporting {
         if (m.embeddingDimension() > 0) {
             p.add(new Param("recurrence", m.rqaSettings()));
         }
-        p.add(new Param("window", bm.window() + " samples, step " + bm.step()));
-        p.add(new Param("calibration quantile", num(bm.quantile())));
         p.add(new Param("alert level", num(m.alertLevel()) + " baseline spreads"));
-        p.add(new Param("sustained departure", bm.sustained() + " windows in a row"));
         StringBuilder used = new StringBuilder();
         for (MeasureModel mm : m.measures()) {
             if (!Double.isNaN(mm.center())) {
@@ -78,12 +78,13 @@ final class Reporting {
 
     static WindowRow row(Windows w, int k, TimeBase time, double[][] values, double[][] rqa, double departure,
                          Level level) {
-        double[] q = new double[RqaStep.MEASURES];
+        double[] q = new double[RqaStep.MEASURES + 2];
         for (int i = 0; i < q.length; i++) {
             q[i] = rqa == null ? Double.NaN : rqa[i][k];
         }
         return new WindowRow(w.start(k), w.end(k), time.seconds(w.start(k)), time.seconds(w.end(k) - 1),
-                q[0], q[1], q[2], q[3], q[4], q[5], q[6], values[4][k], values[5][k], values[0][k], departure, level);
+                q[0], q[1], q[2], q[3], q[4], q[5], q[6], q[7], q[8], values[4][k], values[5][k], values[0][k],
+                departure, level);
     }
 
     /** Each measure present: baseline typical value, value over the last windows, departure of that. */

@@ -1,6 +1,7 @@
 package org.riffle.triage;
 
 import java.util.Objects;
+import org.riffle.recurrence.RqaParams;
 import org.riffle.reservoir.EsnParams;
 
 /**
@@ -9,15 +10,17 @@ import org.riffle.reservoir.EsnParams;
  * @param baselineFrom first baseline row, or -1 for the default (first 25 %)
  * @param baselineTo end of the baseline rows (exclusive), or -1 for the default
  * @param threads worker threads, at least 1 (results do not depend on it)
- * @param window trend window in samples, 0 for automatic (baseline rows / 16, clamped to 100..1000)
+ * @param window trend window in samples (at least 2), 0 for automatic (baseline rows / 16, clamped to
+ *     100..1000)
  * @param step trend step in samples, 0 for automatic (half the window)
  * @param reservoir reservoir settings; with {@code search} its radius, leak and ridge are only the start
  * @param search true to choose spectral radius, leak and ridge by the automatic search on the baseline
  * @param quantile calibration quantile of the baseline windows' scores (0.5 to 0.9999), default 0.99
  * @param sustained consecutive windows above the alert level that make a departure sustained (1 to 50)
+ * @param rqa recurrence settings; automatic m and τ and the threshold policy are resolved on the baseline
  */
 public record TriageParams(int baselineFrom, int baselineTo, int threads, int window, int step,
-                           EsnParams reservoir, boolean search, double quantile, int sustained) {
+                           EsnParams reservoir, boolean search, double quantile, int sustained, RqaParams rqa) {
     /** Default calibration quantile. */
     public static final double DEFAULT_QUANTILE = 0.99;
     /** Default number of windows for a sustained departure. */
@@ -25,6 +28,7 @@ public record TriageParams(int baselineFrom, int baselineTo, int threads, int wi
 
     public TriageParams {
         Objects.requireNonNull(reservoir, "reservoir");
+        Objects.requireNonNull(rqa, "rqa");
         if (threads < 1) {
             throw new IllegalArgumentException("threads " + threads + " must be at least 1");
         }
@@ -35,12 +39,12 @@ public record TriageParams(int baselineFrom, int baselineTo, int threads, int wi
         if (baselineFrom >= 0 && baselineTo <= baselineFrom) {
             throw new IllegalArgumentException("baseline " + baselineFrom + ":" + baselineTo + " is empty");
         }
-        if (window < 0 || step < 0 || (window > 0 && step > window)) {
-            throw new IllegalArgumentException("window " + window + " and step " + step
-                    + " must be positive (or 0 for automatic) with the step at most the window");
+        if (window < 0 || step < 0 || (window > 0 && window < 2)) {
+            throw new IllegalArgumentException("window " + window + " must be at least 2 and step " + step
+                    + " at least 1");
         }
-        if (window > 0 && window < 8) {
-            throw new IllegalArgumentException("window " + window + " is below 8 samples");
+        if (window > 0 && step > window) {
+            throw new IllegalArgumentException("step " + step + " exceeds the window " + window);
         }
         if (!(quantile >= 0.5 && quantile <= 0.9999)) {
             throw new IllegalArgumentException("calibration quantile " + quantile + " must be in [0.5, 0.9999]");
@@ -53,7 +57,7 @@ public record TriageParams(int baselineFrom, int baselineTo, int threads, int wi
     /** Baseline rows and threads as given, everything else default. */
     public TriageParams(int baselineFrom, int baselineTo, int threads) {
         this(baselineFrom, baselineTo, threads, 0, 0, EsnParams.defaults(), true, DEFAULT_QUANTILE,
-                DEFAULT_SUSTAINED);
+                DEFAULT_SUSTAINED, RqaParams.defaults());
     }
 
     /** Defaults: first 25 % as baseline, one thread per core, automatic windows and search. */
@@ -62,27 +66,38 @@ public record TriageParams(int baselineFrom, int baselineTo, int threads, int wi
     }
 
     public TriageParams withBaseline(int from, int to) {
-        return new TriageParams(from, to, threads, window, step, reservoir, search, quantile, sustained);
+        return new TriageParams(from, to, threads, window, step, reservoir, search, quantile, sustained,
+                rqa);
     }
 
     public TriageParams withThreads(int n) {
-        return new TriageParams(baselineFrom, baselineTo, n, window, step, reservoir, search, quantile, sustained);
+        return new TriageParams(baselineFrom, baselineTo, n, window, step, reservoir, search, quantile, sustained,
+                rqa);
     }
 
     public TriageParams withWindow(int w, int s) {
-        return new TriageParams(baselineFrom, baselineTo, threads, w, s, reservoir, search, quantile, sustained);
+        return new TriageParams(baselineFrom, baselineTo, threads, w, s, reservoir, search, quantile, sustained,
+                rqa);
     }
 
     public TriageParams withReservoir(EsnParams p) {
-        return new TriageParams(baselineFrom, baselineTo, threads, window, step, p, search, quantile, sustained);
+        return new TriageParams(baselineFrom, baselineTo, threads, window, step, p, search, quantile, sustained,
+                rqa);
     }
 
     public TriageParams withSearch(boolean on) {
-        return new TriageParams(baselineFrom, baselineTo, threads, window, step, reservoir, on, quantile, sustained);
+        return new TriageParams(baselineFrom, baselineTo, threads, window, step, reservoir, on, quantile, sustained,
+                rqa);
     }
 
     public TriageParams withQuantile(double q) {
-        return new TriageParams(baselineFrom, baselineTo, threads, window, step, reservoir, search, q, sustained);
+        return new TriageParams(baselineFrom, baselineTo, threads, window, step, reservoir, search, q, sustained,
+                rqa);
+    }
+
+    public TriageParams withRqa(RqaParams p) {
+        return new TriageParams(baselineFrom, baselineTo, threads, window, step, reservoir, search, quantile,
+                sustained, p);
     }
 
     /** The baseline these parameters select on a log of {@code rows} rows. */

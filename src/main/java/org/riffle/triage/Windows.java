@@ -1,18 +1,24 @@
 package org.riffle.triage;
 
 /**
- * The trend windows over {@code n} samples: window k covers [k·step, k·step + length), for every k whose
- * window fits entirely. Immutable.
+ * The trend windows over {@code n} samples: window k covers [offset + k·step, offset + k·step + length),
+ * for every k whose window fits entirely. Immutable.
  */
 final class Windows {
+    private final int offset;
     private final int length;
     private final int step;
     private final int count;
 
     Windows(int n, int length, int step) {
+        this(n, length, step, 0);
+    }
+
+    Windows(int n, int length, int step, int offset) {
+        this.offset = offset;
         this.length = length;
         this.step = step;
-        this.count = n < length ? 0 : (n - length) / step + 1;
+        this.count = n < offset + length ? 0 : (n - offset - length) / step + 1;
     }
 
     int count() {
@@ -20,11 +26,11 @@ final class Windows {
     }
 
     int start(int k) {
-        return k * step;
+        return offset + k * step;
     }
 
     int end(int k) {
-        return k * step + length;
+        return offset + k * step + length;
     }
 
     int length() {
@@ -72,6 +78,37 @@ final class Windows {
             out[k] = n > 1 ? Math.sqrt(s / (n - 1)) : Double.NaN;
         }
         return out;
+    }
+
+    /** Kurtosis m4/m2² (Pearson: 3 for a Gaussian) per window, NaN where the mean is or the spread is 0. */
+    double[] kurtoses(double[] x, int from, double[] means) {
+        double[] out = new double[count];
+        for (int k = 0; k < count; k++) {
+            if (Double.isNaN(means[k])) {
+                out[k] = Double.NaN;
+                continue;
+            }
+            double m2 = 0;
+            double m4 = 0;
+            for (int i = from + start(k); i < from + end(k); i++) {
+                if (!Double.isNaN(x[i])) {
+                    double d = x[i] - means[k];
+                    double d2 = d * d;
+                    m2 += d2;
+                    m4 += d2 * d2;
+                }
+            }
+            out[k] = m2 > 0 ? m4 * countPresent(x, from + start(k), from + end(k)) / (m2 * m2) : Double.NaN;
+        }
+        return out;
+    }
+
+    private static int countPresent(double[] x, int a, int b) {
+        int n = 0;
+        for (int i = a; i < b; i++) {
+            n += Double.isNaN(x[i]) ? 0 : 1;
+        }
+        return n;
     }
 
     /**

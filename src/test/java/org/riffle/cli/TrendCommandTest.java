@@ -29,7 +29,8 @@ class TrendCommandTest {
                 "150", "--baseline", "0:400", "--dim", "3", "--delay", "2", "--csv");
         assertEquals(0, r.status(), r.err());
         List<String> lines = r.out().lines().toList();
-        assertEquals("start_index,end_index,start_time,end_time,rr,det,l,lmax,entr,lam,tt,div,vmax", lines.get(0));
+        assertEquals("start_index,end_index,start_time,end_time,rr,det,l,lmax,entr,lam,tt,div,vmax,novelty,flag",
+                lines.get(0));
         Trend t = new Rqa(1).trend(RqaCommandTest.samples(log), 0, 400, 200, 150,
                 new RqaParams(3, 2, RqaParams.Norm.EUCLIDEAN, RqaParams.Threshold.rate(0.05), 2, 2, 1), null);
         assertEquals(1 + (1000 - 200) / 150, lines.size() - 1);
@@ -60,7 +61,7 @@ class TrendCommandTest {
                 "2", "--delay", "3", "--csv");
         assertEquals(0, csv.status(), csv.err());
         assertTrue(csv.out().contains("\n500,700,2026-03-01T00:08:20,2026-03-01T00:11:39,NaN,NaN,NaN,NaN,NaN,NaN,"
-                + "NaN,NaN,NaN\n"), csv.out());
+                + "NaN,NaN,NaN,NaN,NaN\n"), csv.out());
         MainTest.Run text = MainTest.run("trend", log.toString(), "--channel", "vib", "--window", "200", "--dim",
                 "2", "--delay", "3");
         assertTrue(text.out().contains("missing sample at 650"), text.out());

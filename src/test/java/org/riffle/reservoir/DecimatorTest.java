@@ -48,9 +48,9 @@ class DecimatorTest {
     }
 
     @Test
-    void factorIsAQuarterOfTheFirstAutocorrelationZero() {
-        // analytic: the autocorrelation of a sine of period P crosses zero first at P/4
-        assertEquals(10, Decimator.factor(sine(20_000, 1.0 / 160, 0), 0, 20_000, 64));
+    void factorIsAnEighthOfTheFirstAutocorrelationZero() {
+        // analytic: the autocorrelation of a sine of period P crosses zero first at P/4; D = (P/4)/8
+        assertEquals(5, Decimator.factor(sine(20_000, 1.0 / 160, 0), 0, 20_000, 64));
         assertEquals(3, Decimator.factor(sine(20_000, 1.0 / 160, 0), 0, 20_000, 3));
         double[] noise = new double[5000];
         java.util.SplittableRandom r = new java.util.SplittableRandom(1);

@@ -58,6 +58,22 @@ final class Scenarios {
         return out;
     }
 
+    /** The x coordinate of the Hénon map (a = 1.4, b = 0.3), after 1000 transient steps. */
+    static double[] henon(int n) {
+        double[] out = new double[n];
+        double x = 0.1;
+        double y = 0.1;
+        for (int i = 0; i < 1000 + n; i++) {
+            double nx = 1 - 1.4 * x * x + y;
+            y = 0.3 * x;
+            x = nx;
+            if (i >= 1000) {
+                out[i - 1000] = x;
+            }
+        }
+        return out;
+    }
+
     /** AR(1) coloured noise x ← φx + σ·e. */
     static double[] ar1(int n, double phi, double sigma, long seed) {
         SplittableRandom rnd = new SplittableRandom(seed);
@@ -91,13 +107,16 @@ final class Scenarios {
         return out;
     }
 
-    /** Adds decaying ringing bursts (amplitude {@code a}, every {@code every} samples) from {@code change} on. */
+    /**
+     * Adds short decaying ringing bursts (amplitude {@code a}, decay 2 samples, ringing period 3.1 samples)
+     * every {@code every} samples from {@code change} on, like the impacts of a bearing defect.
+     */
     static double[] withBursts(double[] x, int change, int every, double a, long seed) {
         SplittableRandom rnd = new SplittableRandom(seed);
         double[] out = x.clone();
         for (int start = change + rnd.nextInt(every); start < x.length; start += every) {
-            for (int j = 0; j < 30 && start + j < x.length; j++) {
-                out[start + j] += a * Math.exp(-j / 5.0) * Math.sin(2 * Math.PI * j / 3.1);
+            for (int j = 0; j < 12 && start + j < x.length; j++) {
+                out[start + j] += a * Math.exp(-j / 2.0) * Math.sin(2 * Math.PI * j / 3.1);
             }
         }
         return out;
