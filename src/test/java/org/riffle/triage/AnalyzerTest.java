@@ -94,6 +94,24 @@ class AnalyzerTest {
     }
 
     @Test
+    void anOversampledChannelIsAnalysedAtALowerRateAndSaysSo() {
+        // a 5 Hz oscillation sampled at 2 kHz: the autocorrelation's first zero is a quarter period
+        // (100 samples, analytic), so D = 100/8 = 12, capped at baseline rows / 2000 = 5
+        int n = 40_000;
+        double[] x = Scenarios.sineNoise(n, 400, 0.05, 9);
+        float[] f = new float[n];
+        for (int i = 0; i < n; i++) {
+            f[i] = (float) x[i];
+        }
+        Recording r = new Recording(new SourceFacts("fast.csv", 0, "synthetic", "UTF-8", List.of(), List.of()),
+                TimeBase.regular(n, 2000.0, null), List.of(new Channel("fast", "mm/s", f)), List.of(), List.of());
+        ChannelAssessment c = new Analyzer(small(1)).assess(r, TriageListener.NONE).channels().get(0);
+        Param rate = c.parameters().stream().filter(p -> p.name().equals("analysis rate")).findFirst().orElseThrow();
+        assertEquals("400 Hz (1/5 of the sample rate, anti-aliased FIR decimation)", rate.value());
+        assertEquals(Level.STEADY, c.health().level());
+    }
+
+    @Test
     void aChannelMissingFromTheModelIsSaidSo() {
         Recording r = threeChannels(4000);
         Analyzer an = new Analyzer(small(1));
