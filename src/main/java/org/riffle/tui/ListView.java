@@ -27,7 +27,7 @@ final class ListView {
     /** Column widths for a screen {@code cols} wide. */
     record Columns(int name, int spark, int since) {
         static Columns of(int cols, boolean longSince) {
-            int since = longSince ? 11 : 5;
+            int since = !longSince ? 5 : cols >= 100 ? 11 : 8;
             int name = Math.max(16, Math.min(32, cols / 5));
             int fixed = 3 + name + 1 + 1 + 8 + 1 + 1 + 1 + 7 + 1 + 7 + 1 + 3 + 1 + 9 + 1 + since;
             return new Columns(name, Math.max(8, cols - fixed), since);
@@ -92,7 +92,7 @@ final class ListView {
     private static void heading(Canvas c, Columns k) {
         StringBuilder h = new StringBuilder("   ");
         h.append(Text.fit("channel [unit]", k.name(), '~')).append(' ')
-                .append(Text.fit("whole log", k.spark(), '~')).append(' ')
+                .append(Text.fit(k.spark() >= 9 ? "whole log" : "log", k.spark(), '~')).append(' ')
                 .append(Text.right("level", 8, '~')).append(' ').append('Z').append(' ')
                 .append(Text.fit("DET", 7, '~')).append(' ').append(Text.fit("LAM", 7, '~')).append(' ')
                 .append(Text.right("HI", 3, '~')).append(' ').append(Text.fit("state", 9, '~')).append(' ')
@@ -126,8 +126,8 @@ final class ListView {
         col = c.text(col, row, " ", base);
         col = c.field(col, row, state(src, r.channel(), a, level), 9, styleOf(level, sel));
         col = c.text(col, row, " ", base);
-        String since = h != null && h.sinceIndex() >= 0 ? TimeText.moment(src.recording.time(), h.sinceSeconds())
-                : "";
+        String since = h != null && h.sinceIndex() >= 0 ? TimeText.moment(src.recording.time(), h.sinceSeconds(),
+                k.since()) : "";
         col = c.field(col, row, since, k.since(), base);
         c.fill(col, row, base);
     }

@@ -7,8 +7,9 @@ import java.util.Locale;
 import org.riffle.log.TimeBase;
 
 /**
- * Times of a log as the screen writes them: wall-clock times when the log gave them (as written in
- * the log, no zone conversion), elapsed time otherwise. Durations in the largest fitting unit.
+ * Times of a log as the screen writes them: wall-clock times in UTC when the log gave them (as the
+ * note does; a log without offsets is read as if its times were UTC, so they show as written), elapsed
+ * time otherwise. Durations in the largest fitting unit.
  *
  * <p>Stateless.
  */
@@ -20,6 +21,8 @@ final class TimeText {
     private static final DateTimeFormatter CLOCK = DateTimeFormatter.ofPattern("HH:mm:ss", Locale.ROOT)
             .withZone(ZoneOffset.UTC);
     private static final DateTimeFormatter FULL = DateTimeFormatter.ofPattern("MM-dd HH:mm:ss", Locale.ROOT)
+            .withZone(ZoneOffset.UTC);
+    private static final DateTimeFormatter DAY_CLOCK = DateTimeFormatter.ofPattern("dd HH:mm", Locale.ROOT)
             .withZone(ZoneOffset.UTC);
     private static final DateTimeFormatter MINUTE = DateTimeFormatter.ofPattern("HH:mm", Locale.ROOT)
             .withZone(ZoneOffset.UTC);
@@ -34,6 +37,15 @@ final class TimeText {
         }
         Instant t = at(tb, seconds);
         return (tb.spanSeconds() <= 86_400 ? MINUTE : SHORT).format(t);
+    }
+
+    /** As {@link #moment(TimeBase, double)} in at most {@code width} characters: day of month and time at 8. */
+    static String moment(TimeBase tb, double seconds, int width) {
+        String m = moment(tb, seconds);
+        if (m.length() <= width || tb.origin().isEmpty()) {
+            return m;
+        }
+        return DAY_CLOCK.format(at(tb, seconds));
     }
 
     /** A moment to the second, for the cursor read-out. */
@@ -52,7 +64,7 @@ final class TimeText {
         }
         double first = tb.size() > 0 ? tb.seconds(0) : 0;
         return DAY.format(at(tb, first)) + " to " + (s <= 86_400 ? MINUTE : SHORT).format(at(tb, first + s))
-                + " (" + duration(s) + ")";
+                + " UTC (" + duration(s) + ")";
     }
 
     /** A duration in the largest fitting unit: {@code 12.5 s}, {@code 35 min}, {@code 24.0 h}, {@code 3.2 d}. */

@@ -7,10 +7,9 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.io.TempDir;
 
 /**
- * The main screen for the demo log, compared cell for cell with a checked-in text once the analysis
+ * The main screen for the demo log ({@code fixtures/demo/af2-process.csv}), compared cell for cell with a checked-in text once the analysis
  * has finished (the analysis is deterministic and the screen shows no wall-clock time, so nothing
  * needs normalising beyond trailing blanks). After an intended change of the screen or the analysis,
  * regenerate with {@code mvn test -Dtest=MainScreenGoldenTest -Driffle.golden.update=true} and review
@@ -19,22 +18,17 @@ import org.junit.jupiter.api.io.TempDir;
 class MainScreenGoldenTest {
     private static final Path GOLDEN = Path.of("src/test/resources/org/riffle/tui");
 
-    @TempDir
-    Path dir;
+    private static final Path DEMO = Path.of("fixtures/demo/af2-process.csv");
 
+    /** One analysis of the demo log, the main screen at the minimum size and after a resize. */
     @Test
-    void mainScreenOfTheDemoLogAt80x24() throws Exception {
-        check("main-80x24.txt", 80, 24, false);
+    void mainScreenOfTheDemoLogAt80x24AndAt120x30() throws Exception {
+        VirtualScreen v = new VirtualScreen(List.of(DEMO), 80, 24, false).analysed();
+        check("af2-main-80x24.txt", v);
+        check("af2-main-120x30.txt", v.resize(120, 30));
     }
 
-    @Test
-    void mainScreenOfTheDemoLogAt120x30InAscii() throws Exception {
-        check("main-120x30-ascii.txt", 120, 30, true);
-    }
-
-    private void check(String name, int cols, int rows, boolean ascii) throws Exception {
-        Path log = DemoCsv.write(dir.resolve("pump-skid.csv"), 2000);
-        VirtualScreen v = new VirtualScreen(List.of(log), cols, rows, ascii).analysed();
+    private void check(String name, VirtualScreen v) throws Exception {
         String actual = v.text();
         Path file = GOLDEN.resolve(name);
         if (Boolean.getBoolean("riffle.golden.update")) {

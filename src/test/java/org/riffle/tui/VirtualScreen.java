@@ -43,7 +43,7 @@ final class VirtualScreen {
         for (Path p : logs) {
             recs.add(LogReader.read(p, ReadOptions.defaults()));
         }
-        loop = new ScreenLoop(screen, recs, new ScreenOptions(ascii, false, 1), desk);
+        loop = new ScreenLoop(screen, recs, new ScreenOptions(ascii, false, Runtime.getRuntime().availableProcessors()), desk);
         loop.render();
     }
 
