@@ -25,6 +25,11 @@ final class Text {
             Map.entry(0x03A9, "Ohm"), Map.entry(0x2126, "Ohm"), Map.entry(0x20AC, "EUR"),
             Map.entry(0x00A7, "S."), Map.entry(0x00E5, "a"), Map.entry(0x0131, "i"), Map.entry(0x0142, "l"),
             Map.entry(0x0141, "L"), Map.entry(0x00F0, "d"), Map.entry(0x00FE, "th"), Map.entry(0x2022, "*"),
+            Map.entry(0x03B1, "alpha"), Map.entry(0x03B2, "beta"), Map.entry(0x03B5, "eps"),
+            Map.entry(0x03C4, "tau"), Map.entry(0x03BB, "lambda"), Map.entry(0x03C6, "phi"),
+            Map.entry(0x03C1, "rho"), Map.entry(0x03C3, "sigma"), Map.entry(0x03C9, "omega"),
+            Map.entry(0x0394, "Delta"), Map.entry(0x2192, "->"), Map.entry(0x2190, "<-"), Map.entry(0x2248, "~"),
+            Map.entry(0x221A, "sqrt"), Map.entry(0x221E, "inf"), Map.entry(0x2260, "!="),
             Map.entry((int) Fmt.GLUE, String.valueOf(Fmt.GLUE)));
 
     private Text() {
