@@ -13,9 +13,13 @@ public final class Main {
         System.exit(run(args, new PrintWriter(System.out, true), new PrintWriter(System.err, true)));
     }
 
-    /** Runs riffle with {@code args}, writing to {@code out} and {@code err}; returns the exit status. */
+    /**
+     * Runs riffle with {@code args}, writing to {@code out} and {@code err} through a {@link SafeWriter}
+     * each (control characters from input neutralised); returns the exit status.
+     */
     public static int run(String[] args, PrintWriter out, PrintWriter err) {
-        return commandLine(out, err).execute(args);
+        return commandLine(new PrintWriter(new SafeWriter(out), true), new PrintWriter(new SafeWriter(err), true))
+                .execute(args);
     }
 
     /** The configured command line, for tests and for {@link #run}. */
