@@ -26,7 +26,7 @@ public final class Main {
             // room for this line. No reduced streaming form exists yet: the user must raise the heap.
             e.println("riffle: not enough memory: the Java heap limit is "
                     + Runtime.getRuntime().maxMemory() / (1024 * 1024) + " MiB; raise it, e.g. java -Xmx4g -jar"
-                    + " riffle.jar ..., or read a shorter stretch of the log");
+                    + " riffle.jar ..., or split the log into shorter files");
             return ExitCode.FAILED;
         }
     }
