@@ -3,15 +3,11 @@ package org.riffle.bench;
 import java.io.BufferedOutputStream;
 import java.io.IOException;
 import java.io.OutputStream;
-import java.lang.management.ManagementFactory;
-import java.lang.management.ThreadMXBean;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.Arrays;
 import java.util.Locale;
 import java.util.SplittableRandom;
-import org.riffle.log.LogException;
 import org.riffle.log.LogReader;
 import org.riffle.log.ReadOptions;
 import org.riffle.log.Recording;
@@ -22,8 +18,7 @@ import org.riffle.log.Recording;
  * several runs after warm-up, every timestamp parsed) in a 150 MB heap. The file is invented and
  * written by {@link #writeCsv} from a fixed seed into a folder the caller gives (never committed).
  *
- * <p>Static methods for the bench harness; {@link #main} writes the file to a temporary folder, times
- * the read and deletes the file. Run it with {@code -Xmx150m} to check the heap target.
+ * <p>Stateless; the harness ({@code riffle bench}) times the benchmark.
  */
 public final class ReadBench {
     /** Rows of the target case. */
@@ -32,26 +27,6 @@ public final class ReadBench {
     public static final int CHANNELS = 8;
 
     private ReadBench() {
-    }
-
-    /**
-     * One case: its name, the median and fastest wall-clock seconds, the median CPU seconds of the reading
-     * thread (closer to an idle machine's wall clock when the cores are shared), the file size and a check
-     * value.
-     */
-    public record Case(String name, double medianSeconds, double minSeconds, double medianCpuSeconds, long bytes,
-                       double checksum) {
-        /** Megabytes (10^6 bytes) per second at the median. */
-        public double megabytesPerSecond() {
-            return bytes / 1e6 / medianSeconds;
-        }
-
-        @Override
-        public String toString() {
-            return String.format(Locale.ROOT, "%-40s median %7.3f s  min %7.3f s  cpu %7.3f s  %6.1f MB  %6.1f MB/s"
-                    + "  check %.6g", name, medianSeconds, minSeconds, medianCpuSeconds, bytes / 1e6,
-                    megabytesPerSecond(), checksum);
-        }
     }
 
     /**
@@ -130,32 +105,10 @@ public final class ReadBench {
         return n;
     }
 
-    /** Reads {@code file} {@code warmups} times untimed, then {@code runs} times timed. */
-    public static Case read(String name, Path file, int warmups, int runs) throws IOException, LogException {
-        double check = 0;
-        for (int i = 0; i < warmups; i++) {
-            check = checksum(LogReader.read(file, ReadOptions.defaults()));
-        }
-        double[] secs = new double[runs];
-        double[] cpu = new double[runs];
-        ThreadMXBean threads = ManagementFactory.getThreadMXBean();
-        for (int i = 0; i < runs; i++) {
-            long c0 = threads.getCurrentThreadCpuTime();
-            long t0 = System.nanoTime();
-            Recording r = LogReader.read(file, ReadOptions.defaults());
-            secs[i] = (System.nanoTime() - t0) / 1e9;
-            cpu[i] = (threads.getCurrentThreadCpuTime() - c0) / 1e9;
-            check = checksum(r);
-        }
-        return new Case(name, median(secs), Arrays.stream(secs).min().orElse(Double.NaN), median(cpu),
-                Files.size(file), check);
-    }
-
-    private static double median(double[] x) {
-        double[] s = x.clone();
-        Arrays.sort(s);
-        int n = s.length;
-        return n % 2 == 1 ? s[n / 2] : (s[n / 2 - 1] + s[n / 2]) / 2;
+    /** Reading the bench CSV of {@code rows} rows, every timestamp parsed; target 0.5 s at 1,000,000 rows. */
+    static Benchmark read(int rows) {
+        return new Timed<Path>("read CSV " + Sizes.count(rows) + " rows x " + CHANNELS + " ch", rows == ROWS ? 500
+                : Double.NaN, dir -> Inputs.csv(dir, rows), f -> checksum(LogReader.read(f, ReadOptions.defaults())));
     }
 
     /** Sum of the last row's values and its time: keeps the work from being optimised away. */
@@ -166,25 +119,5 @@ public final class ReadBench {
             s += r.channels().get(c).value(last);
         }
         return s;
-    }
-
-    /** The target case: writes the bench CSV to a temporary folder, reads it, deletes it. */
-    public static Case target(int warmups, int runs) throws IOException, LogException {
-        Path dir = Files.createTempDirectory("riffle-bench");
-        Path file = dir.resolve("bench-1M-x8.csv");
-        try {
-            writeCsv(file, ROWS, CHANNELS, 20_260_301L);
-            return read("read CSV 1M rows x 8 ch, ISO 8601 times", file, warmups, runs);
-        } finally {
-            Files.deleteIfExists(file);
-            Files.deleteIfExists(dir);
-        }
-    }
-
-    public static void main(String[] args) throws IOException, LogException {
-        int warmups = args.length > 0 ? Integer.parseInt(args[0]) : 3;
-        int runs = args.length > 1 ? Integer.parseInt(args[1]) : 7;
-        System.out.println(target(warmups, runs));
-        System.out.printf(Locale.ROOT, "max heap %d MB%n", Runtime.getRuntime().maxMemory() >> 20);
     }
 }

@@ -25,6 +25,7 @@ import org.riffle.triage.TriageListener;
 import org.riffle.triage.TriageParams;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.ParameterException;
@@ -97,6 +98,9 @@ final class ReportCommand implements Callable<Integer> {
     @Option(names = "--ascii", description = "Write the note in ASCII only even when the locale says UTF-8.")
     private boolean ascii;
 
+    @Mixin
+    private VibrationOptions vibration;
+
     @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: one per core).")
     private int threads = Runtime.getRuntime().availableProcessors();
 
@@ -114,7 +118,8 @@ final class ReportCommand implements Callable<Integer> {
     @Override
     public Integer call() throws LogException {
         int[] span = span();
-        TriageParams params = new TriageParams(span[0], span[1], Math.max(1, threads));
+        TriageParams params = new TriageParams(span[0], span[1], Math.max(1, threads))
+                .withVibration(vibration.params());
         NoteWriter writer = NoteWriter.standard().withAscii(ascii || !NoteWriter.localeIsUtf8(env));
         Findings findings = new Findings(site, asset, point, technician, conditions, Map.of(), comment);
         long folders = logs.stream().filter(Files::isDirectory).count();

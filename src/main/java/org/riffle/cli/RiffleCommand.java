@@ -30,6 +30,7 @@ import picocli.CommandLine.Spec;
             RqaCommand.class,
             TrendCommand.class,
             HealthCommand.class,
+            BenchCommand.class,
         })
 final class RiffleCommand implements Callable<Integer> {
     @Spec

@@ -15,7 +15,6 @@ import org.riffle.log.Recording;
 import org.riffle.log.TimeIssue;
 import org.riffle.recurrence.RqaParams;
 import org.riffle.signal.Summary;
-import org.riffle.signal.VibrationParams;
 import org.riffle.triage.BaselineModel.ChannelModel;
 
 /**
@@ -133,7 +132,7 @@ public final class Analyzer {
         listener.progress(i, "judgement", 0.9);
         // vibration figures: filled by the vibration step where the channel is a vibration channel
         Optional<VibrationFigures> vibration = VibrationStep.figures(c, recording.time().rateHz(), baseline,
-                VibrationParams.defaults());
+                params.vibration());
         ChannelAssessment a = ChannelWork.assess(c, m, bm, baseline, recording.time(), resets, stats, vibration);
         listener.progress(i, "done", 1);
         listener.updated(i, a);

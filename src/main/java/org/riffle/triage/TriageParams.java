@@ -3,6 +3,7 @@ package org.riffle.triage;
 import java.util.Objects;
 import org.riffle.recurrence.RqaParams;
 import org.riffle.reservoir.EsnParams;
+import org.riffle.signal.VibrationParams;
 
 /**
  * What the triage is asked to do. Immutable; derive changed copies with the {@code with...} methods.
@@ -18,9 +19,12 @@ import org.riffle.reservoir.EsnParams;
  * @param quantile calibration quantile of the baseline windows' scores (0.5 to 0.9999), default 0.99
  * @param sustained consecutive windows above the alert level that make a departure sustained (1 to 50)
  * @param rqa recurrence settings; automatic m and τ and the threshold policy are resolved on the baseline
+ * @param vibration what the user said about the machine (group, support, speed, bearing) for the
+ *     vibration figures of velocity and acceleration channels
  */
 public record TriageParams(int baselineFrom, int baselineTo, int threads, int window, int step,
-                           EsnParams reservoir, boolean search, double quantile, int sustained, RqaParams rqa) {
+                           EsnParams reservoir, boolean search, double quantile, int sustained, RqaParams rqa,
+                           VibrationParams vibration) {
     /** Default calibration quantile. */
     public static final double DEFAULT_QUANTILE = 0.99;
     /** Default number of windows for a sustained departure. */
@@ -29,6 +33,7 @@ public record TriageParams(int baselineFrom, int baselineTo, int threads, int wi
     public TriageParams {
         Objects.requireNonNull(reservoir, "reservoir");
         Objects.requireNonNull(rqa, "rqa");
+        Objects.requireNonNull(vibration, "vibration");
         if (threads < 1) {
             throw new IllegalArgumentException("threads " + threads + " must be at least 1");
         }
@@ -57,7 +62,7 @@ public record TriageParams(int baselineFrom, int baselineTo, int threads, int wi
     /** Baseline rows and threads as given, everything else default. */
     public TriageParams(int baselineFrom, int baselineTo, int threads) {
         this(baselineFrom, baselineTo, threads, 0, 0, EsnParams.defaults(), true, DEFAULT_QUANTILE,
-                DEFAULT_SUSTAINED, RqaParams.defaults());
+                DEFAULT_SUSTAINED, RqaParams.defaults(), VibrationParams.defaults());
     }
 
     /** Defaults: first 25 % as baseline, one thread per core, automatic windows and search. */
@@ -67,37 +72,42 @@ public record TriageParams(int baselineFrom, int baselineTo, int threads, int wi
 
     public TriageParams withBaseline(int from, int to) {
         return new TriageParams(from, to, threads, window, step, reservoir, search, quantile, sustained,
-                rqa);
+                rqa, vibration);
     }
 
     public TriageParams withThreads(int n) {
         return new TriageParams(baselineFrom, baselineTo, n, window, step, reservoir, search, quantile, sustained,
-                rqa);
+                rqa, vibration);
     }
 
     public TriageParams withWindow(int w, int s) {
         return new TriageParams(baselineFrom, baselineTo, threads, w, s, reservoir, search, quantile, sustained,
-                rqa);
+                rqa, vibration);
     }
 
     public TriageParams withReservoir(EsnParams p) {
         return new TriageParams(baselineFrom, baselineTo, threads, window, step, p, search, quantile, sustained,
-                rqa);
+                rqa, vibration);
     }
 
     public TriageParams withSearch(boolean on) {
         return new TriageParams(baselineFrom, baselineTo, threads, window, step, reservoir, on, quantile, sustained,
-                rqa);
+                rqa, vibration);
     }
 
     public TriageParams withQuantile(double q) {
         return new TriageParams(baselineFrom, baselineTo, threads, window, step, reservoir, search, q, sustained,
-                rqa);
+                rqa, vibration);
     }
 
     public TriageParams withRqa(RqaParams p) {
         return new TriageParams(baselineFrom, baselineTo, threads, window, step, reservoir, search, quantile,
-                sustained, p);
+                sustained, p, vibration);
+    }
+
+    public TriageParams withVibration(VibrationParams p) {
+        return new TriageParams(baselineFrom, baselineTo, threads, window, step, reservoir, search, quantile,
+                sustained, rqa, p);
     }
 
     /** The baseline these parameters select on a log of {@code rows} rows. */

@@ -83,7 +83,10 @@ final class VibrationStep {
             return s.remark() + hint;
         }
         List<String> parts = new ArrayList<>();
-        parts.add("band " + s.band().label() + " (" + s.band().how() + ")");
+        if (s.table().isEmpty()) {
+            parts.add("name the machine group and support for a zone");
+        }
+        parts.add("Band " + s.band().label() + " (" + s.band().how() + ")");
         if (s.table().isPresent()) {
             int to = Math.min(b.toRow(), x.length);
             if (to - b.fromRow() >= Vibration.MIN_SAMPLES) {
@@ -95,8 +98,6 @@ final class VibrationStep {
                             s.velocityRmsMmS() > alarm ? "; above the alarm" : ""));
                 }
             }
-        } else {
-            parts.add(s.remark());
         }
         return String.join("; ", parts);
     }

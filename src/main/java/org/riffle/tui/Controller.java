@@ -238,7 +238,7 @@ final class Controller {
         int source = s.row().source();
         Source src = s.sources.get(source);
         try {
-            TriageParams p = new TriageParams(a, b, src.params().threads());
+            TriageParams p = src.params().withBaseline(a, b);
             p.baselineFor(src.recording.rows());
             restart(source, p);
             s.message = "recomputing against the new baseline, rows " + a + "-" + b;

@@ -114,4 +114,14 @@ class VibrationStepTest {
                 .orElseThrow();
         assertEquals("not analysed: segment length 4096 does not fit 1000 samples (at least 8 needed)", f.remark());
     }
+
+    @Test
+    void withoutATableTheRemarkSaysWhatIsMissing() {
+        Channel c = steppedVelocity();
+        VibrationFigures f = VibrationStep.figures(c, FS, Baseline.firstQuarter(c.size()), VibrationParams.defaults())
+                .orElseThrow();
+        assertEquals("", f.zone());
+        assertTrue(f.remark().startsWith("name the machine group and support for a zone; Band 10-1000 Hz ("),
+                f.remark());
+    }
 }

@@ -13,6 +13,7 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.riffle.note.Findings;
+import org.riffle.triage.TriageParams;
 
 /** The screen on Lanterna's virtual terminal: what is shown, and what keys do. */
 class TriageScreenTest {
@@ -140,6 +141,16 @@ class TriageScreenTest {
         v.analysed();
         v.press(KeyType.Escape);
         assertTrue(v.line(3).startsWith("baseline: rows 1000-1085"), v.line(3));
+    }
+
+    @Test
+    void markingABaselineKeepsEveryOtherSetting() throws Exception {
+        VirtualScreen v = open(80, 24).analysed();
+        Source src = v.loop.controller.s.sources.get(0);
+        TriageParams custom = src.params().withThreads(1).withWindow(200, 100);
+        src.restart(custom);
+        v.type("\n").type("b").type("lll").type("b");
+        assertEquals(custom.withBaseline(1000, 1085), src.params());
     }
 
     @Test
