@@ -30,7 +30,7 @@ final class AssetForm {
                     new MachineFacts(r.machine().machineGroup(), v, r.machine().shaftRpm(), r.machine().bearing()))),
             new Field("shaft speed (r/min)", r -> r.machine().shaftRpm(), (r, v) -> r.machine(
                     new MachineFacts(r.machine().machineGroup(), r.machine().support(), v, r.machine().bearing()))),
-            new Field("bearing (n d D angle)", r -> r.machine().bearing(), (r, v) -> r.machine(
+            new Field("bearing (N,d,D[,angle])", r -> r.machine().bearing(), (r, v) -> r.machine(
                     new MachineFacts(r.machine().machineGroup(), r.machine().support(), r.machine().shaftRpm(), v))));
 
     private AssetForm() {
@@ -44,7 +44,7 @@ final class AssetForm {
     static void paint(Canvas c, ScreenState s) {
         int n = FIELDS.size();
         int top = c.rows() - 2 - n;
-        c.field(0, top, "Visit and machine: Up/Down choose, Enter edit, Esc done", c.cols(), Style.REVERSE);
+        c.field(0, top, "Visit and machine: Up/Down choose, Enter edit, Esc done (machine facts: analysed again)", c.cols(), Style.REVERSE);
         for (int i = 0; i < n; i++) {
             boolean sel = i == s.assetField;
             String v = FIELDS.get(i).get().apply(s.remarks);

@@ -8,6 +8,7 @@ import java.util.Optional;
 import java.util.concurrent.Executor;
 import java.util.function.Consumer;
 import org.riffle.note.Findings;
+import org.riffle.signal.VibrationParams;
 import org.riffle.triage.Assessment;
 import org.riffle.triage.TriageParams;
 
@@ -35,6 +36,7 @@ final class Controller {
     private boolean quitAfterSave;
     private boolean saveWhenDone;
     private final Optional<Findings> earlier;
+    private MachineFacts appliedMachine = MachineFacts.none();
     /** Set when the next frame must be sent whole. */
     boolean fullRedraw;
 
@@ -254,10 +256,29 @@ final class Controller {
             s.prompt = new Prompt(f.label(), f.get().apply(s.remarks), t -> f.set().accept(s.remarks, t));
         } else if (k.getKeyType() == KeyType.Escape || a.isPresent() && a.get() == Action.QUIT) {
             s.mode = ScreenState.Mode.NONE;
+            machineChanged();
         } else if (a.isPresent() && a.get() == Action.UP) {
             s.assetField = Math.max(0, s.assetField - 1);
         } else if (a.isPresent() && a.get() == Action.DOWN) {
             s.assetField = Math.min(AssetForm.FIELDS.size() - 1, s.assetField + 1);
+        }
+    }
+
+    /** After the form: when the machine facts changed, every log is analysed again with them. */
+    private void machineChanged() {
+        MachineFacts m = s.remarks.machine();
+        if (m.equals(appliedMachine)) {
+            return;
+        }
+        try {
+            VibrationParams v = m.toParams();
+            appliedMachine = m;
+            for (int i = 0; i < s.sources.size(); i++) {
+                restart(i, s.sources.get(i).params().withVibration(v));
+            }
+            s.message = "machine facts changed: analysing again";
+        } catch (IllegalArgumentException ex) {
+            s.message = "not applied: " + ex.getMessage();
         }
     }
 

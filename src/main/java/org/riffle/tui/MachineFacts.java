@@ -1,6 +1,9 @@
 package org.riffle.tui;
 
 import java.util.Objects;
+import org.riffle.signal.BearingGeometry;
+import org.riffle.signal.VibrationParams;
+import org.riffle.signal.ZoneTable;
 
 /**
  * What the technician enters about the machine for the vibration figures: machine group, support
@@ -22,5 +25,31 @@ record MachineFacts(String machineGroup, String support, String shaftRpm, String
 
     static MachineFacts none() {
         return new MachineFacts("", "", "", "");
+    }
+
+    /**
+     * The vibration parameters these facts give (blank fields keep the defaults).
+     *
+     * @throws IllegalArgumentException with a message fit to show when a field cannot be read
+     */
+    VibrationParams toParams() {
+        VibrationParams p = VibrationParams.defaults();
+        if (machineGroup.isBlank() != support.isBlank()) {
+            throw new IllegalArgumentException("give both machine group and support for a severity zone");
+        }
+        if (!machineGroup.isBlank()) {
+            p = p.withTable(new ZoneTable(ZoneTable.parseGroup(machineGroup), ZoneTable.parseSupport(support)));
+        }
+        if (!shaftRpm.isBlank()) {
+            try {
+                p = p.withRpm(Double.parseDouble(shaftRpm.strip()));
+            } catch (NumberFormatException e) {
+                throw new IllegalArgumentException("shaft speed '" + shaftRpm + "' is not a number of r/min", e);
+            }
+        }
+        if (!bearing.isBlank()) {
+            p = p.withBearing(BearingGeometry.parse(bearing));
+        }
+        return p;
     }
 }

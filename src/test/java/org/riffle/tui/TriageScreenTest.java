@@ -187,6 +187,17 @@ class TriageScreenTest {
     }
 
     @Test
+    void machineFactsThatCannotBeReadAreRefusedWithTheReason() throws Exception {
+        VirtualScreen v = open(80, 24).type("ajjjjjjj").press(KeyType.Enter).type("1481x").press(KeyType.Enter)
+                .press(KeyType.Escape);
+        assertEquals("not applied: shaft speed '1481x' is not a number of r/min", v.line(23));
+        v.type("a").press(KeyType.Enter).press(new KeyStroke('u', true, false)).type("1481")
+                .press(KeyType.Enter).press(KeyType.Escape);
+        assertEquals(1481.0, v.loop.controller.s.sources.get(0).params().vibration().rpm().getAsDouble());
+        assertEquals(1, v.loop.controller.s.sources.get(0).generation(), "analysed again with the speed");
+    }
+
+    @Test
     void aDraftOfAnEarlierSessionIsOfferedAndRestored() throws Exception {
         Findings earlier = Findings.EMPTY.withGeneral("left from before").withComment(log.toString(), "flow", "noisy");
         VirtualScreen v = new VirtualScreen(List.of(log), 80, 24, false, Optional.of(earlier));
