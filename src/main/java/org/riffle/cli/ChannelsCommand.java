@@ -27,6 +27,8 @@ import picocli.CommandLine.Spec;
                 + "kurt is Pearson's kurtosis m4/m2^2 (3 for a Gaussian, not the excess); crest = peak / rms. "
                 + "CSV numbers are rounded to 7 significant digits, the text table to 4; an empty CSV field "
                 + "or '-' means undefined.",
+                "What the reader noticed (a time base without UTC offsets, gaps, cells read as missing) goes to "
+                + "standard error, one line each, beginning with 'riffle: LOG: warning:'.",
                 "Exit status: 0 done, 2 usage error, 3 bad input (the message names the file)."})
 final class ChannelsCommand implements Callable<Integer> {
     /** Cells in the sparkline column. */
@@ -66,6 +68,11 @@ final class ChannelsCommand implements Callable<Integer> {
     public Integer call() throws LogException {
         Recording rec = LogReader.read(log, read.toReadOptions());
         PrintWriter out = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        for (String w : rec.source().warnings()) {
+            err.println("riffle: " + rec.source().file() + ": warning: " + w);
+        }
+        err.flush();
         List<ChannelTable.Row> rows = ChannelTable.rows(rec, SPARK_WIDTH, !ascii && utf8(env),
                 vibration.params());
         if (csv) {

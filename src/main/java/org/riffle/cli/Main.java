@@ -13,9 +13,22 @@ public final class Main {
         System.exit(run(args, new PrintWriter(System.out, true), new PrintWriter(System.err, true)));
     }
 
-    /** Runs riffle with {@code args}, writing to {@code out} and {@code err}; returns the exit status. */
+    /**
+     * Runs riffle with {@code args}, writing to {@code out} and {@code err} through a {@link SafeWriter}
+     * each (control characters from input neutralised); returns the exit status.
+     */
     public static int run(String[] args, PrintWriter out, PrintWriter err) {
-        return commandLine(out, err).execute(args);
+        PrintWriter e = new PrintWriter(new SafeWriter(err), true);
+        try {
+            return commandLine(new PrintWriter(new SafeWriter(out), true), e).execute(args);
+        } catch (OutOfMemoryError oom) {
+            // The arrays that held the log are unreachable once the command has unwound, so there is
+            // room for this line. No reduced streaming form exists yet: the user must raise the heap.
+            e.println("riffle: not enough memory: the Java heap limit is "
+                    + Runtime.getRuntime().maxMemory() / (1024 * 1024) + " MiB; raise it, e.g. java -Xmx4g -jar"
+                    + " riffle.jar ..., or split the log into shorter files");
+            return ExitCode.FAILED;
+        }
     }
 
     /** The configured command line, for tests and for {@link #run}. */

@@ -5,6 +5,8 @@ import java.nio.file.Path;
 /**
  * Input the user can fix: a missing, unreadable or malformed log. The message is fit to print on one
  * line: the file, then the line and column where they apply, then what is wrong and what to do next.
+ * Control characters in the file name or the quoted input are neutralised ({@link Printable#clean}),
+ * so a hostile file name cannot drive the terminal the message is printed on.
  *
  * <p>Immutable. Lines and columns are 1-based; 0 means "does not apply".
  */
@@ -48,7 +50,7 @@ public final class LogException extends Exception {
     private static String format(String file, long line, long column, String reason) {
         StringBuilder sb = new StringBuilder();
         if (file != null) {
-            sb.append(file);
+            sb.append(Printable.clean(file));
             if (line > 0) {
                 sb.append(':').append(line);
                 if (column > 0) {
@@ -57,7 +59,7 @@ public final class LogException extends Exception {
             }
             sb.append(": ");
         }
-        sb.append(reason);
+        sb.append(Printable.clean(reason));
         return sb.toString();
     }
 

@@ -55,28 +55,24 @@ final class Numbers {
         }
         byte mark = decimalComma ? (byte) ',' : (byte) '.';
         long m = 0;
-        int all = 0;
-        int significant = 0;
-        int fraction = 0;
-        boolean seenMark = false;
-        for (; i < e; i++) {
-            int d = b[i] - '0';
-            if (d >= 0 && d <= 9) {
-                all++;
-                m = m * 10 + d;
-                if (m != 0 && ++significant > 18) {
-                    return slow(b, s, e, decimalComma);
-                }
-                if (seenMark) {
-                    fraction++;
-                }
-            } else if (b[i] == mark && !seenMark) {
-                seenMark = true;
-            } else {
-                break;
-            }
+        int start = i;
+        int d;
+        while (i < e && (d = b[i] - '0') >= 0 && d <= 9) {
+            m = m * 10 + d;
+            i++;
         }
-        if (all == 0) {
+        int digits = i - start;
+        int fraction = 0;
+        if (i < e && b[i] == mark) {
+            int from = ++i;
+            while (i < e && (d = b[i] - '0') >= 0 && d <= 9) {
+                m = m * 10 + d;
+                i++;
+            }
+            fraction = i - from;
+            digits += fraction;
+        }
+        if (digits == 0 || digits > 18) {
             return slow(b, s, e, decimalComma);
         }
         int exp = 0;
@@ -94,7 +90,7 @@ final class Numbers {
                 return slow(b, s, e, decimalComma);
             }
             for (; i < e; i++) {
-                int d = b[i] - '0';
+                d = b[i] - '0';
                 if (d < 0 || d > 9) {
                     return slow(b, s, e, decimalComma);
                 }

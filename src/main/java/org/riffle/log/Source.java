@@ -42,7 +42,10 @@ final class Source implements Closeable {
         }
     }
 
-    /** Opens {@code file}; refuses missing files, directories, unreadable and empty files. */
+    /**
+     * Opens {@code file}; refuses missing files, directories, named pipes and devices (anything but a
+     * regular file, after following links), unreadable and empty files.
+     */
     static Source open(Path file) throws LogException {
         String name = file.toString();
         if (!Files.exists(file)) {
@@ -50,6 +53,12 @@ final class Source implements Closeable {
         }
         if (Files.isDirectory(file)) {
             throw new LogException(name, 0, 0, "is a directory, not a log file");
+        }
+        if (!Files.isRegularFile(file)) {
+            // A named pipe or a device: opening a pipe with no writer blocks for ever, and a device may
+            // never end. Such data can still be read through standard input ('-'), where it is meant.
+            throw new LogException(name, 0, 0, "not a regular file (a named pipe or a device);"
+                    + " copy it to a file first, or give it on standard input: riffle ... - < " + name);
         }
         try {
             return of(Files.newInputStream(file), name, Files.size(file));

@@ -46,18 +46,44 @@ final class Stamps {
      * one in {@code order}. Surrounding spaces are ignored.
      */
     static long parse(byte[] b, int s, int e, Order order) {
+        return parse(b, s, e, order, null);
+    }
+
+    /** Remembers the last date read, so rows of the same day skip the calendar. Mutable; one thread. */
+    static final class DayCache {
+        private final byte[] text = new byte[12];
+        private int length = -1;
+        private long day;
+        private Order order;
+    }
+
+    /** As {@link #parse(byte[], int, int, Order)}, reusing {@code cache} (may be null) for a repeated date. */
+    static long parse(byte[] b, int s, int e, Order order, DayCache cache) {
         while (s < e && b[s] == ' ') {
             s++;
         }
         while (e > s && b[e - 1] == ' ') {
             e--;
         }
-        long day = date(b, s, e, order);
-        if (day == FAIL) {
-            return FAIL;
+        long day;
+        int i;
+        if (cache != null && cache.order == order && sameDate(b, s, e, cache)) {
+            day = cache.day;
+            i = s + cache.length;
+        } else {
+            day = date(b, s, e, order);
+            if (day == FAIL) {
+                return FAIL;
+            }
+            i = s + (int) (day >>> 40);
+            day = (day << 24) >> 24;
+            if (cache != null && i - s <= cache.text.length) {
+                System.arraycopy(b, s, cache.text, 0, i - s);
+                cache.length = i - s;
+                cache.day = day;
+                cache.order = order;
+            }
         }
-        int i = s + (int) (day >>> 40);
-        day = (day << 24) >> 24;
         if (i == e) {
             return day * NANOS_PER_DAY;
         }
@@ -70,6 +96,19 @@ final class Stamps {
         }
         long tod = timeOfDay(b, i, e);
         return tod == FAIL ? FAIL : day * NANOS_PER_DAY + tod;
+    }
+
+    private static boolean sameDate(byte[] b, int s, int e, DayCache c) {
+        int n = c.length;
+        if (n < 0 || e - s < n || (e - s > n && isDigit(b[s + n]))) {
+            return false;
+        }
+        for (int k = 0; k < n; k++) {
+            if (b[s + k] != c.text[k]) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /**

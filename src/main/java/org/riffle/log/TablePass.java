@@ -31,6 +31,7 @@ final class TablePass {
     final Columns cols;
     final RowLines rowLines = new RowLines();
     final Damage damage = new Damage();
+    private final Stamps.DayCache days = new Stamps.DayCache();
 
     private int cell;
     private long stamp;
@@ -179,11 +180,11 @@ final class TablePass {
                 cols.values[j][cols.rows] = v;
                 break;
             case Layout.STAMP:
-                stamp = Stamps.parse(b, s, e, order);
+                stamp = Stamps.parse(b, s, e, order, days);
                 noteBadTime(stamp == Stamps.FAIL, b, s, e);
                 break;
             case Layout.DATE:
-                day = Stamps.parse(b, s, e, order);
+                day = Stamps.parse(b, s, e, order, days);
                 noteBadTime(day == Stamps.FAIL, b, s, e);
                 break;
             case Layout.TIME_OF_DAY:

@@ -34,6 +34,9 @@ final class TextReader {
         boolean whole = head.length < HEAD;
         Encodings.Choice enc = Encodings.choose(src.name, head, head.length, opt.charset(), whole);
         Charset cs = enc.charset();
+        if (whole && head.length == enc.bomLength() && enc.bomLength() > 0) {
+            throw new LogException(src.name, 0, 0, "empty file (only a UTF-8 byte-order mark)");
+        }
         List<String> lines = headLines(src.name, head, enc.bomLength(), cs, whole,
                 opt.charset().isPresent() && cs.equals(StandardCharsets.UTF_8));
         if (lines.isEmpty() && !whole) {

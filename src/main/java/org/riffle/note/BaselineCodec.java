@@ -32,6 +32,10 @@ final class BaselineCodec {
         k.raw("model.step", Integer.toString(m.step()));
         k.raw("model.quantile", Double.toString(m.quantile()));
         k.raw("model.sustained", Integer.toString(m.sustained()));
+        k.text("model.rqa-norm", m.rqaNorm());
+        k.raw("model.min-line", Integer.toString(m.minLine()));
+        k.raw("model.min-vert", Integer.toString(m.minVert()));
+        k.raw("model.theiler", Integer.toString(m.theiler()));
         k.raw("model.channels", Integer.toString(m.channels().size()));
         for (ChannelModel c : m.channels()) {
             k.blank().comment("channel " + c.name());
@@ -97,6 +101,10 @@ final class BaselineCodec {
         int step = c.integer("model.step");
         double quantile = c.number("model.quantile");
         int sustained = c.integer("model.sustained");
+        String norm = c.text("model.rqa-norm");
+        int minLine = c.integer("model.min-line");
+        int minVert = c.integer("model.min-vert");
+        int theiler = c.integer("model.theiler");
         int n = c.integer("model.channels");
         List<ChannelModel> channels = new ArrayList<>();
         for (int i = 0; i < n; i++) {
@@ -105,7 +113,7 @@ final class BaselineCodec {
         c.end();
         try {
             return new BaselineModel(source, new Baseline(from, to, description, span[2].equals("same-log")), window,
-                    step, quantile, sustained, channels);
+                    step, quantile, sustained, channels, norm, minLine, minVert, theiler);
         } catch (IllegalArgumentException e) {
             throw new NoteException(file, "does not hold a usable baseline (" + e.getMessage() + ")");
         }

@@ -117,7 +117,8 @@ public final class BaselineStore {
         String description = span.description() + " of " + Sources.fileName(b.sourceFile()) + " (stored baseline "
                 + b.id() + ")";
         return new BaselineModel(m.source(), new Baseline(span.fromRow(), span.toRow(), description, false),
-                m.window(), m.step(), m.quantile(), m.sustained(), m.channels());
+                m.window(), m.step(), m.quantile(), m.sustained(), m.channels(), m.rqaNorm(), m.minLine(),
+                m.minVert(), m.theiler());
     }
 
     /**

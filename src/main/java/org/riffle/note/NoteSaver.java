@@ -5,6 +5,8 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.AccessDeniedException;
 import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.FileSystemException;
+import java.nio.file.LinkOption;
+import java.nio.file.StandardOpenOption;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
@@ -13,7 +15,8 @@ import java.nio.file.ReadOnlyFileSystemException;
 /**
  * Saves a rendered note: atomically (see {@link AtomicFiles}) and never over an existing file. When
  * the path asked for is taken, the first free of {@code name-2.txt}, {@code name-3.txt}, ... is used;
- * the path actually written is returned so the caller can show it.
+ * the path actually written is returned so the caller can show it. A device or pipe given as the
+ * path (for example {@code /dev/null}) is written into, as it holds no note to protect.
  *
  * <p>Stateless and thread-safe.
  */
@@ -57,6 +60,17 @@ public final class NoteSaver {
         return stem.replaceAll("[^\\p{L}\\p{N}._+-]", "_") + "-note.txt";
     }
 
+    /** A device or pipe ({@code /dev/null}, a FIFO) holds no note to protect: the text is written into it. */
+    private static Path toDevice(Path requested, Path abs, String note) throws NoteException {
+        try {
+            Files.write(abs, note.getBytes(StandardCharsets.UTF_8), StandardOpenOption.WRITE,
+                    LinkOption.NOFOLLOW_LINKS);
+            return abs;
+        } catch (IOException e) {
+            throw new NoteException(requested, "cannot write into this device or pipe (" + e.getMessage() + ")", e);
+        }
+    }
+
     private static NoteException cannotWrite(Path dir, Exception e) {
         return new NoteException(dir, "cannot write in this folder (permission denied or read-only);"
                 + " choose another path for the note (your comments are kept)", e);
@@ -82,6 +96,10 @@ public final class NoteSaver {
         }
         if (Files.isDirectory(abs)) {
             throw new NoteException(requested, "is a folder; choose a file name inside it");
+        }
+        if (Files.exists(abs, LinkOption.NOFOLLOW_LINKS) && !Files.isRegularFile(abs, LinkOption.NOFOLLOW_LINKS)
+                && !Files.isSymbolicLink(abs)) {
+            return toDevice(requested, abs, note);
         }
         if (!Files.isDirectory(dir)) {
             throw new NoteException(dir, "no such folder; choose another path for the note"

@@ -3,8 +3,8 @@ package org.riffle.note;
 import java.text.Normalizer;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
+import org.riffle.log.Printable;
 
 /**
  * Text hygiene for everything that reaches a note, a draft or a baseline file: neutralising control
@@ -25,57 +25,24 @@ final class Text {
             Map.entry(0x03A9, "Ohm"), Map.entry(0x2126, "Ohm"), Map.entry(0x20AC, "EUR"),
             Map.entry(0x00A7, "S."), Map.entry(0x00E5, "a"), Map.entry(0x0131, "i"), Map.entry(0x0142, "l"),
             Map.entry(0x0141, "L"), Map.entry(0x00F0, "d"), Map.entry(0x00FE, "th"), Map.entry(0x2022, "*"),
+            Map.entry(0x03B1, "alpha"), Map.entry(0x03B2, "beta"), Map.entry(0x03B5, "eps"),
+            Map.entry(0x03C4, "tau"), Map.entry(0x03BB, "lambda"), Map.entry(0x03C6, "phi"),
+            Map.entry(0x03C1, "rho"), Map.entry(0x03C3, "sigma"), Map.entry(0x03C9, "omega"),
+            Map.entry(0x0394, "Delta"), Map.entry(0x2192, "->"), Map.entry(0x2190, "<-"), Map.entry(0x2248, "~"),
+            Map.entry(0x221A, "sqrt"), Map.entry(0x221E, "inf"), Map.entry(0x2260, "!="),
             Map.entry((int) Fmt.GLUE, String.valueOf(Fmt.GLUE)));
 
     private Text() {
     }
 
-    /**
-     * One line of input made harmless: every control character (C0, DEL, C1), format character
-     * (bidirectional overrides, zero-width marks), line or paragraph separator, and unpaired surrogate
-     * is replaced by a visible, inert spelling: {@code ^[} for ESC and the other C0 characters in caret
-     * notation, {@code ^?} for DEL, {@code <U+XXXX>} for the rest. An escape sequence thus loses its
-     * ESC and prints as plain text.
-     */
+    /** One line of input made harmless: the shared neutraliser, {@link Printable#clean}. */
     static String clean(String s) {
-        StringBuilder sb = new StringBuilder(s.length());
-        s.codePoints().forEach(cp -> appendClean(sb, cp));
-        return sb.toString();
+        return Printable.clean(s);
     }
 
-    /**
-     * Several lines of typed text made harmless: line breaks (CR LF, CR, LF) are kept as LF, a tab
-     * becomes one space, everything else as in {@link #clean}.
-     */
+    /** Several lines of typed text made harmless: {@link Printable#cleanLines}. */
     static String cleanLines(String s) {
-        String unified = s.replace("\r\n", "\n").replace('\r', '\n').replace('\t', ' ');
-        StringBuilder sb = new StringBuilder(unified.length());
-        unified.codePoints().forEach(cp -> {
-            if (cp == '\n') {
-                sb.append('\n');
-            } else {
-                appendClean(sb, cp);
-            }
-        });
-        return sb.toString();
-    }
-
-    private static void appendClean(StringBuilder sb, int cp) {
-        if (cp < 0x20) {
-            sb.append('^').append((char) (cp + 0x40));
-        } else if (cp == 0x7F) {
-            sb.append("^?");
-        } else if (isUnsafe(cp)) {
-            sb.append(String.format(Locale.ROOT, "<U+%04X>", cp));
-        } else {
-            sb.appendCodePoint(cp);
-        }
-    }
-
-    private static boolean isUnsafe(int cp) {
-        int type = Character.getType(cp);
-        return type == Character.CONTROL || type == Character.FORMAT || type == Character.LINE_SEPARATOR
-                || type == Character.PARAGRAPH_SEPARATOR || type == Character.SURROGATE;
+        return Printable.cleanLines(s);
     }
 
     /**

@@ -5,10 +5,11 @@ import com.googlecode.lanterna.TerminalSize;
 import com.googlecode.lanterna.TextCharacter;
 import com.googlecode.lanterna.TextColor;
 import com.googlecode.lanterna.screen.Screen;
+import org.riffle.log.Printable;
 
 /**
  * The one place that writes cells into Lanterna's back buffer: text clipped to the screen, passed
- * through the {@link Glyphs} set (so ASCII mode never emits anything else), in one of a few styles.
+ * through the shared neutraliser and the {@link Glyphs} set (so ASCII mode never emits anything else), in one of a few styles.
  * Colour is only ever a second cue; without colour the same styles use bold and reverse video.
  *
  * <p>Confined to the UI thread.
@@ -46,7 +47,7 @@ final class Canvas {
         if (row < 0 || row >= rows) {
             return col;
         }
-        String t = glyphs.text(s);
+        String t = shown(s);
         int c = col;
         for (int i = 0; i < t.length() && c < cols; ) {
             int cp = t.codePointAt(i);
@@ -61,12 +62,20 @@ final class Canvas {
 
     /** Writes {@code s} fitted to exactly {@code width} cells (see {@link Text#fit}). */
     int field(int col, int row, String s, int width, Style style) {
-        return text(col, row, Text.fit(glyphs.text(s), width, glyphs.ellipsis), style);
+        return text(col, row, Text.fit(shown(s), width, glyphs.ellipsis), style);
     }
 
     /** Writes {@code s} right-aligned in {@code width} cells. */
     int right(int col, int row, String s, int width, Style style) {
-        return text(col, row, Text.right(glyphs.text(s), width, glyphs.ellipsis), style);
+        return text(col, row, Text.right(shown(s), width, glyphs.ellipsis), style);
+    }
+
+    /**
+     * Text as it may reach the terminal: control characters and escape sequences from input
+     * neutralised ({@link Printable#clean}), then fitted to the glyph set.
+     */
+    private String shown(String s) {
+        return glyphs.text(Printable.clean(s));
     }
 
     /** One character. */

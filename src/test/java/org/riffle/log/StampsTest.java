@@ -67,6 +67,21 @@ class StampsTest {
     }
 
     @Test
+    void theDayCacheNeverChangesAResult() {
+        SplittableRandom rnd = new SplittableRandom(44L);
+        Stamps.DayCache cache = new Stamps.DayCache();
+        String[] days = {"1.3.2026", "11.3.2026", "01.03.2026", "1.3.20261", "2026-03-01", "2026-03-011", "2026-02-30"};
+        for (int k = 0; k < 20_000; k++) {
+            String text = days[rnd.nextInt(days.length)] + (rnd.nextBoolean() ? "" : " " + rnd.nextInt(24) + ":"
+                    + String.format("%02d", rnd.nextInt(60)) + (rnd.nextBoolean() ? "" : "x"));
+            byte[] b = text.getBytes(java.nio.charset.StandardCharsets.US_ASCII);
+            for (Stamps.Order o : Stamps.Order.values()) {
+                assertEquals(Stamps.parse(b, 0, b.length, o), Stamps.parse(b, 0, b.length, o, cache), text + " " + o);
+            }
+        }
+    }
+
+    @Test
     void splitTimeOfDayAndAmPm() {
         assertEquals(0L, Stamps.timeOfDay("12:00:00 AM"));
         assertEquals(12 * 3600 * 1_000_000_000L, Stamps.timeOfDay("12:00:00 PM"));

@@ -73,6 +73,15 @@ class BaselineRoundTripTest {
     }
 
     @Test
+    void nonDefaultRecurrenceSettingsReadBackToo() throws Exception {
+        BaselineModel odd = new BaselineModel(model.source(), model.baseline(), model.window(), model.step(),
+                0.95, 5, model.channels(), "max", 3, 4, 7);
+        StoredBaseline b = BaselineStore.at(dir).save("P-3", odd, source);
+        KeyLines.Parsed parsed = KeyLines.parse(b.path(), Files.readString(b.path()), BaselineFile.KIND);
+        assertEquals(odd, BaselineCodec.read(b.path(), parsed));
+    }
+
+    @Test
     void aLaterLogJudgedAgainstTheStoredModelIsJudgedAsAgainstTheOriginal() throws Exception {
         BaselineStore store = BaselineStore.at(dir);
         StoredBaseline b = store.save("P-3", model, source);

@@ -50,12 +50,12 @@ class BaselineStoreTest {
         assertEquals(T, listed.saved());
         assertEquals("0.1.0", listed.riffleVersion());
         assertEquals(NoteFixture.FILE.toString(), listed.sourceFile());
-        // Same digest as FileDigestTest: what GNU coreutils 9.1 sha256sum prints for the fixture.
-        assertEquals("59acba2e2ca351febdfa24c69d51ae6b7d5a6e2876fdb915f68bc596a9d26390", listed.sourceSha256());
+        // What GNU coreutils 9.1 sha256sum prints for the fixture (see NoteFixture.SHA256).
+        assertEquals(NoteFixture.SHA256, listed.sourceSha256());
         assertEquals(CHANNELS, listed.channels());
         String text = Files.readString(b.path());
         assertTrue(text.startsWith("riffle-baseline 1\n# A healthy baseline"), text);
-        assertTrue(text.contains("\nsource-size: 5232\n") && text.contains("\nmodel.example: 1.5 2.5\n"), text);
+        assertTrue(text.contains("\nsource-size: 176072\n") && text.contains("\nmodel.example: 1.5 2.5\n"), text);
         assertTrue(text.endsWith("\nend\n"), text);
     }
 

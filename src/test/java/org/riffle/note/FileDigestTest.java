@@ -12,10 +12,12 @@ class FileDigestTest {
     @Test
     void digestOfTheFixtureEqualsWhatSha256sumPrints() throws Exception {
         // Printed by GNU coreutils 9.1 `sha256sum src/test/resources/org/riffle/note/booster-p3.csv`
-        // (run once by hand on the committed fixture; NoteFixtureTest keeps the fixture's bytes fixed).
+        // (run once by hand on the committed fixture; NoteFixtureTest keeps the fixture's bytes fixed):
+        // 9be6f054592f051b1bc7b75b495ab52d872e61ea1fca23fef47d9038b9fb470a, 176072 bytes by `stat -c %s`.
         FileDigest d = FileDigest.of(NoteFixture.FILE);
-        assertEquals("59acba2e2ca351febdfa24c69d51ae6b7d5a6e2876fdb915f68bc596a9d26390", d.sha256());
-        assertEquals(5232, d.sizeBytes(), "as `stat -c %s` prints it");
+        assertEquals("9be6f054592f051b1bc7b75b495ab52d872e61ea1fca23fef47d9038b9fb470a", d.sha256());
+        assertEquals(NoteFixture.SHA256, d.sha256());
+        assertEquals(176_072, d.sizeBytes(), "as `stat -c %s` prints it");
     }
 
     @Test

@@ -131,6 +131,14 @@ class NoteSaverTest {
     }
 
     @Test
+    void aDeviceIsWrittenIntoNotBesideIt() throws Exception {
+        Path devNull = Path.of("/dev/null");
+        assumeTrue(Files.exists(devNull), "a Unix /dev/null");
+        assertEquals(devNull, NoteSaver.save(devNull, NOTE));
+        assertFalse(Files.exists(Path.of("/dev/null-2")), "no numbered file beside the device");
+    }
+
+    @Test
     void aFolderGivenAsTheNotePathIsAClearMessage() {
         NoteException e = assertThrows(NoteException.class, () -> NoteSaver.save(dir, NOTE));
         assertEquals(dir + ": is a folder; choose a file name inside it", e.getMessage());

@@ -33,6 +33,13 @@ class TextTest {
     }
 
     @Test
+    void asciiSpellsTheMethodSymbolsTheTradeUses() {
+        assertEquals("m = 4, tau = 12, eps = 0.1 -> radius, alpha 0.5, lambda1 ~ 0.9, x2, sigma^2",
+                Text.ascii("m = 4, \u03c4 = 12, \u03b5 = 0.1 \u2192 radius, \u03b1 0.5, \u03bb1 \u2248 0.9, \u00d72,"
+                        + " \u03c3^2"));
+    }
+
+    @Test
     void wrapBreaksAtSpacesWithAHangingIndent() {
         assertEquals(List.of("  - alpha beta", "    gamma delta"),
                 Text.wrap("alpha beta gamma delta", 15, "  - ", "    "));
