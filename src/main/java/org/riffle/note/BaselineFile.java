@@ -5,7 +5,6 @@ import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.time.Instant;
-import java.time.format.DateTimeParseException;
 import java.util.ArrayList;
 import java.util.HexFormat;
 import java.util.List;
@@ -105,13 +104,7 @@ final class BaselineFile {
             throw new NoteException(file, "baseline format " + p.version() + " (this riffle reads format "
                     + VERSION + " only); save the baseline again from its log with this riffle");
         }
-        Instant saved;
-        KeyLines.Entry s = p.one(file, "saved");
-        try {
-            saved = Instant.parse(s.raw());
-        } catch (DateTimeParseException e) {
-            throw new NoteException(file, "line " + s.line() + ": unreadable time '" + Text.clean(s.raw()) + "'");
-        }
+        Instant saved = p.instant(file, "saved");
         String sha = p.one(file, "source-sha256").raw();
         if (!sha.matches("[0-9a-f]{64}")) {
             throw new NoteException(file, "line " + p.one(file, "source-sha256").line()

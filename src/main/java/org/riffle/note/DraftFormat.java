@@ -2,7 +2,6 @@ package org.riffle.note;
 
 import java.nio.file.Path;
 import java.time.Instant;
-import java.time.format.DateTimeParseException;
 import java.util.Map;
 import java.util.TreeMap;
 
@@ -61,13 +60,7 @@ final class DraftFormat {
             throw new NoteException(file, "draft format version " + p.version() + " is not the version "
                     + VERSION + " this riffle reads; open it in a text editor to copy your comments");
         }
-        Instant saved;
-        KeyLines.Entry s = p.one(file, "saved");
-        try {
-            saved = Instant.parse(s.raw());
-        } catch (DateTimeParseException e) {
-            throw new NoteException(file, "line " + s.line() + ": unreadable time '" + Text.clean(s.raw()) + "'");
-        }
+        Instant saved = p.instant(file, "saved");
         Map<Findings.ChannelRef, String> comments = new TreeMap<>();
         for (KeyLines.Entry e : p.all("comment")) {
             String[] parts = e.raw().split("\t", -1);

@@ -1,6 +1,8 @@
 package org.riffle.note;
 
 import java.nio.file.Path;
+import java.time.Instant;
+import java.time.format.DateTimeParseException;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -132,6 +134,16 @@ final class KeyLines {
                 throw new NoteException(file, "no '" + key + "' line; the file is incomplete or damaged");
             }
             return found;
+        }
+
+        /** The only entry named {@code key}, read as an ISO-8601 instant. */
+        Instant instant(Path file, String key) throws NoteException {
+            Entry e = one(file, key);
+            try {
+                return Instant.parse(e.raw());
+            } catch (DateTimeParseException ex) {
+                throw new NoteException(file, "line " + e.line() + ": unreadable time '" + Text.clean(e.raw()) + "'");
+            }
         }
 
         /** All entries named {@code key}, in file order. */
