@@ -14,9 +14,10 @@ final class FalseNeighbours {
 
     /**
      * The false fraction for m = 1 … maxDim ({@code NaN} where no vector had a usable neighbour); the
-     * curve stops early when too few vectors remain.
+     * curve stops early when too few vectors remain, and after the first m whose fraction is at most
+     * {@code stopAt} (the higher dimensions, the costliest to search, cannot change that choice).
      */
-    static double[] fnn(double[] s, int tau, int maxDim, double rtol, double atol, int theiler) {
+    static double[] fnn(double[] s, int tau, int maxDim, double rtol, double atol, int theiler, double stopAt) {
         double ra = std(s);
         double[] out = new double[maxDim];
         int used = 0;
@@ -41,6 +42,9 @@ final class FalseNeighbours {
             }
             out[m - 1] = tested > 0 ? (double) fals / tested : Double.NaN;
             used = m;
+            if (out[m - 1] <= stopAt) {
+                break;
+            }
         }
         return java.util.Arrays.copyOf(out, used);
     }

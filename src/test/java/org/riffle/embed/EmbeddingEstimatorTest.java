@@ -21,6 +21,7 @@ class EmbeddingEstimatorTest {
         assertEquals(2, e.embedding().dimension(), e.dimensionCurve().toString());
         assertTrue(e.dimensionCurve().get(0) > 0.5, "most neighbours are false at m = 1: " + e.dimensionCurve());
         assertTrue(e.dimensionCurve().get(1) <= 0.01, e.dimensionCurve().toString());
+        assertEquals(2, e.dimensionCurve().size(), "the curve ends where the fraction reaches the limit");
         assertEquals("false nearest neighbours", e.dimensionMethod());
         assertEquals("given", e.delayMethod());
     }
