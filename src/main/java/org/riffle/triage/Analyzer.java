@@ -145,8 +145,8 @@ public final class Analyzer {
         String source = baseline.sameLog() ? baseline.description() + " of " + fileName(recording)
                 : baseline.description();
         RqaParams r = params.rqa();
-        return new BaselineModel(source, baseline, params.windowFor(rows), params.stepFor(rows), params.quantile(),
-                params.sustained(), List.of(), r.norm().word(), r.minLine(), r.minVert(), r.theiler());
+        return new BaselineModel(source, baseline, params.windowFor(rows), params.stepFor(rows, recording.rows()),
+                params.quantile(), params.sustained(), List.of(), r.norm().word(), r.minLine(), r.minVert(), r.theiler());
     }
 
     private static String fileName(Recording r) {
