@@ -6,8 +6,9 @@ import java.util.Arrays;
  * The small automatic search of {@link OneStepTrainer}: a grid of spectral radii, leak rates and ridge
  * penalties, judged on {@code folds} contiguous time blocks of the baseline (each block validated by a
  * readout fitted on the others, with a washout-long gap after the block left out of training).
- * A series longer than {@code searchRows} usable steps is searched on every k-th step only (k chosen
- * so that about {@code searchRows} remain); the final readout uses every step.
+ * A series longer than {@code searchRows} usable steps is searched on {@code folds} stretches spread
+ * evenly over it, of searchRows / folds steps each plus the longest washout; the final readout uses every
+ * step.
  *
  * <p>Immutable: arrays are copied in and out.
  *

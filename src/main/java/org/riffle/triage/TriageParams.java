@@ -131,7 +131,7 @@ public record TriageParams(int baselineFrom, int baselineTo, int threads, int wi
 
     /** The trend window for a baseline of {@code baselineRows} rows. */
     public int windowFor(int baselineRows) {
-        return window > 0 ? window : Math.max(100, Math.min(1000, baselineRows / 16));
+        return window > 0 ? window : Math.max(100, Math.min(500, baselineRows / 16));
     }
 
     /** The trend step for a baseline of {@code baselineRows} rows in a log of {@code rows} rows. */
