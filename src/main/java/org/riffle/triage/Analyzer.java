@@ -134,6 +134,7 @@ public final class Analyzer {
         Optional<VibrationFigures> vibration = VibrationStep.figures(c, recording.time().rateHz(), baseline,
                 params.vibration());
         ChannelAssessment a = ChannelWork.assess(c, m, bm, baseline, recording.time(), resets, stats, vibration);
+        a = ThumbnailStep.attach(a, c, m, bm, baseline, recording.time());
         listener.progress(i, "done", 1);
         listener.updated(i, a);
         return a;
