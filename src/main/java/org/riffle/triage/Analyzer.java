@@ -135,6 +135,7 @@ public final class Analyzer {
                 params.vibration());
         ChannelAssessment a = ChannelWork.assess(c, m, bm, baseline, recording.time(), resets, stats, vibration,
                 known);
+        a = ThumbnailStep.attach(a, c, m, bm, baseline, recording.time());
         listener.progress(i, "done", 1);
         listener.updated(i, a);
         return a;
