@@ -17,6 +17,12 @@ import java.util.function.DoubleConsumer;
  * thread and stops with a {@link java.util.concurrent.CancellationException} when it is interrupted.
  */
 public final class OneStepTrainer {
+    /**
+     * Most rows the final readout is fitted on: a longer baseline contributes every k-th row (the
+     * reservoir still runs every step). 101 weights fitted on 25,000 rows differ from a fit on all rows
+     * by far less than the held-out error, and the fit no longer grows with the baseline.
+     */
+    public static final int FIT_ROWS = 25_000;
     /** Shortest washout in steps. */
     public static final int MIN_WASHOUT = 50;
     /** The tolerance of the echo-state check. */
@@ -75,7 +81,7 @@ public final class OneStepTrainer {
                     + " samples (" + usable + " usable steps)");
         }
         Reservoir chosen = first.with(best);
-        Folds full = Folds.harvest(chosen, u, y, bestWashout, space.folds(), 1);
+        Folds full = Folds.harvest(chosen, u, y, bestWashout, space.folds(), Math.max(1, usable / FIT_ROWS));
         double[][] foldWeights = full.foldWeights(best.ridge());
         Esn esn = Esn.of(chosen, full.allWeights(best.ridge()), bestWashout);
         report(progress, ++done, total);
