@@ -10,13 +10,15 @@ import org.riffle.log.LogReader;
 import org.riffle.log.ReadOptions;
 import org.riffle.log.Recording;
 import org.riffle.tui.ScreenProbe;
+import org.riffle.tui.Warmup;
 
 /**
  * The screen's speed targets: the first frame for the demo log within 0.6 s of the JVM's start, and
  * a key press redrawn within 50 ms at 200 × 60 while the analysis runs. Must run in a fresh JVM (the
  * first number counts from the JVM's start, reading the log included):
  * {@code java -cp target/riffle.jar org.riffle.bench.ScreenBench [LOG]}. The screen is drawn on
- * Lanterna's virtual terminal, so the terminal emulator's own drawing time is not included.
+ * Lanterna's virtual terminal, so the terminal emulator's own drawing time is not included. As
+ * {@code riffle LOG} does, it starts the screen's {@link Warmup} before reading the log.
  */
 public final class ScreenBench {
     /** Target for the first frame, ms after the JVM's start. */
@@ -31,6 +33,7 @@ public final class ScreenBench {
     public static ScreenProbe.Timings measure(Path log, PrintWriter out) throws Exception {
         long start = ManagementFactory.getRuntimeMXBean().getStartTime();
         long entered = System.currentTimeMillis();
+        Warmup.start();
         Recording r = LogReader.read(log, ReadOptions.defaults());
         long read = System.currentTimeMillis();
         ScreenProbe.Timings t = ScreenProbe.run(List.of(r), 200, 60, 40, 25);

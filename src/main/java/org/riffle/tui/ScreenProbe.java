@@ -105,7 +105,7 @@ public final class ScreenProbe {
     }
 
     /** Saves nothing. */
-    private static final class NoDesk implements NoteDesk {
+    static final class NoDesk implements NoteDesk {
         @Override
         public Path saveNote(List<Assessment> assessments, Findings findings) {
             throw new UnsupportedOperationException("the probe saves no note");
