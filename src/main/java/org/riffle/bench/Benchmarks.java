@@ -33,6 +33,8 @@ final class Benchmarks {
         all.add(ReservoirBench.run(sizes.runSteps()));
         all.add(SpectrumBench.welch(sizes.welchSamples()));
         all.add(new ReportBench(sizes.rows()));
+        all.add(new ScreenChildBench(0));
+        all.add(new ScreenChildBench(sizes.rows()));
         return all;
     }
 }
