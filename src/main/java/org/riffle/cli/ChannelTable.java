@@ -5,6 +5,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.function.Function;
 import org.riffle.log.Channel;
+import org.riffle.log.Printable;
 import org.riffle.log.Recording;
 import org.riffle.log.TimeIssue;
 import org.riffle.signal.Severity;
@@ -100,7 +101,8 @@ final class ChannelTable {
         for (Row r : rows) {
             String[] line = new String[n + 1];
             for (int i = 0; i < n; i++) {
-                line[i] = COLUMNS.get(i).shown().apply(r);
+                // neutralised here, not only on the way out, so the widths are those printed
+                line[i] = Printable.clean(COLUMNS.get(i).shown().apply(r));
             }
             line[n] = r.sparkline();
             cells.add(line);
