@@ -149,8 +149,9 @@ public final class BaselineStore {
         } catch (FileAlreadyExistsException e) {
             throw new NoteException(first, "100 baselines saved in the same second; wait a second", e);
         } catch (IOException e) {
-            throw new NoteException(dir, "cannot save the baseline (" + e.getMessage() + "); set "
-                    + Folders.BASELINE_ENV + " or --store to a writable folder", e);
+            throw new NoteException(dir, "cannot save the baseline (" + IoReason.of(e) + "); "
+                    + (IoReason.diskFull(e) ? "free some space, or " : "") + "set " + Folders.BASELINE_ENV
+                    + " or --store to a writable folder; the stored baselines are as they were", e);
         }
     }
 
