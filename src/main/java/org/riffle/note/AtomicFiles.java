@@ -1,12 +1,14 @@
 package org.riffle.note;
 
 import java.io.IOException;
+import java.io.UncheckedIOException;
 import java.nio.ByteBuffer;
 import java.nio.channels.FileChannel;
 import java.nio.channels.SeekableByteChannel;
 import java.nio.charset.CharacterCodingException;
 import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.DirectoryStream;
 import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.FileSystemException;
 import java.nio.file.Files;
@@ -15,8 +17,11 @@ import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.nio.file.StandardOpenOption;
 import java.nio.file.attribute.FileAttribute;
+import java.nio.file.attribute.FileTime;
 import java.nio.file.attribute.PosixFilePermissions;
 import java.security.SecureRandom;
+import java.time.Duration;
+import java.time.Instant;
 import java.util.Arrays;
 import java.util.HexFormat;
 import java.util.Set;
@@ -135,6 +140,34 @@ final class AtomicFiles {
             throw e;
         }
         removeTemp(temp, null);
+    }
+
+    /**
+     * Removes the temporary files that saves killed mid-way left in {@code dir} for targets named
+     * {@code *suffix}: hidden regular files {@code .NAME.TAG.tmp} last modified more than
+     * {@code olderThan} ago (a save in progress elsewhere is seconds old). Best effort: a file that
+     * cannot be removed stays, and is harmless.
+     *
+     * @return how many were removed
+     */
+    static int sweep(Path dir, String suffix, Duration olderThan) {
+        FileTime before = FileTime.from(Instant.now().minus(olderThan));
+        int removed = 0;
+        try (DirectoryStream<Path> s = Files.newDirectoryStream(dir, "." + "*" + suffix + ".*.tmp")) {
+            for (Path p : s) {
+                String tag = p.getFileName().toString();
+                tag = tag.substring(0, tag.length() - ".tmp".length());
+                tag = tag.substring(tag.lastIndexOf('.') + 1);
+                if (tag.matches("[0-9a-f]{12}") && Files.isRegularFile(p, LinkOption.NOFOLLOW_LINKS)
+                        && Files.getLastModifiedTime(p, LinkOption.NOFOLLOW_LINKS).compareTo(before) < 0
+                        && Files.deleteIfExists(p)) {
+                    removed++;
+                }
+            }
+        } catch (IOException | UncheckedIOException e) {
+            // Leftovers are hidden, never listed and never read; they can wait for the next save.
+        }
+        return removed;
     }
 
     /** Hard-links {@code temp} at {@code target} (refuses an existing target); false when taken meanwhile. */

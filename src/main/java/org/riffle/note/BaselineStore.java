@@ -7,6 +7,7 @@ import java.nio.file.Files;
 import java.nio.file.LinkOption;
 import java.nio.file.Path;
 import java.time.Clock;
+import java.time.Duration;
 import java.time.ZoneOffset;
 import java.time.format.DateTimeFormatter;
 import java.util.ArrayList;
@@ -143,6 +144,7 @@ public final class BaselineStore {
         Path first = dir.resolve(ID.format(now) + SUFFIX);
         try {
             Files.createDirectories(dir);
+            AtomicFiles.sweep(dir, SUFFIX, Duration.ofHours(1));
             Path written = AtomicFiles.writeNew(i -> NoteSaver.candidate(first, i), 100,
                     text.getBytes(StandardCharsets.UTF_8), fault);
             return BaselineFile.header(written, KeyLines.parse(written, text, BaselineFile.KIND));
