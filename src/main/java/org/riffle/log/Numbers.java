@@ -28,7 +28,12 @@ final class Numbers {
     private static final float[] FLOAT_POW10 = {1e0f, 1e1f, 1e2f, 1e3f, 1e4f, 1e5f, 1e6f, 1e7f, 1e8f, 1e9f, 1e10f};
     private static final double[] DOUBLE_POW10 = {1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11,
         1e12, 1e13, 1e14, 1e15, 1e16, 1e17, 1e18, 1e19, 1e20, 1e21, 1e22};
-    private static final Pattern PLAIN = Pattern.compile("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
+    /**
+     * A plain decimal number. Possessive quantifiers throughout: the form has one reading, and with
+     * ordinary (backtracking) ones a long run of digits ending in another character took time
+     * quadratic in its length (a 250 kB cell ran for minutes).
+     */
+    private static final Pattern PLAIN = Pattern.compile("[+-]?+(?:\\d++(?:\\.\\d*+)?+|\\.\\d++)(?:[eE][+-]?+\\d++)?+");
     private static final Pattern GROUPED_POINT = Pattern.compile("[+-]?\\d{1,3}([,' \u00a0\u202f]\\d{3})+(\\.\\d*)?");
     private static final Pattern GROUPED_COMMA = Pattern.compile("[+-]?\\d{1,3}([.' \u00a0\u202f]\\d{3})+(,\\d*)?");
     private static final long MANTISSA_LIMIT = 1L << 53;

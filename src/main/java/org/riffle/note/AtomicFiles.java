@@ -1,12 +1,14 @@
 package org.riffle.note;
 
 import java.io.IOException;
+import java.io.UncheckedIOException;
 import java.nio.ByteBuffer;
 import java.nio.channels.FileChannel;
 import java.nio.channels.SeekableByteChannel;
 import java.nio.charset.CharacterCodingException;
 import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.DirectoryStream;
 import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.FileSystemException;
 import java.nio.file.Files;
@@ -15,8 +17,11 @@ import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.nio.file.StandardOpenOption;
 import java.nio.file.attribute.FileAttribute;
+import java.nio.file.attribute.FileTime;
 import java.nio.file.attribute.PosixFilePermissions;
 import java.security.SecureRandom;
+import java.time.Duration;
+import java.time.Instant;
 import java.util.Arrays;
 import java.util.HexFormat;
 import java.util.Set;
@@ -36,13 +41,49 @@ import java.util.function.Supplier;
  * <p>Stateless and thread-safe.
  */
 final class AtomicFiles {
-    /** A fault hook called between writing and moving; tests throw from it to simulate a crash. */
+    /** The steps of a save, in order; a {@link Fault} is called before each. */
+    enum Step {
+        /** Writing the bytes into the temporary file. */
+        WRITE,
+        /** Syncing the temporary file to the device. */
+        SYNC,
+        /** Moving (or linking) the temporary file into place. */
+        MOVE
+    }
+
+    /**
+     * A fault hook called between writing and moving; tests throw from it to simulate a crash, or
+     * from {@link #before} to simulate a full disk or a failing device at any step.
+     */
     interface Fault {
         /** No fault. */
         Fault NONE = (temp, target) -> {
         };
 
         void beforeMove(Path temp, Path target) throws IOException;
+
+        /** Called before each step with the temporary file (already created) and the target. */
+        default void before(Step step, Path temp, Path target) throws IOException {
+            if (step == Step.MOVE) {
+                beforeMove(temp, target);
+            }
+        }
+
+        /** A fault that throws {@code failure} before {@code step}, as the device would at that step. */
+        static Fault at(Step step, IOException failure) {
+            return new Fault() {
+                @Override
+                public void beforeMove(Path temp, Path target) {
+                }
+
+                @Override
+                public void before(Step s, Path temp, Path target) throws IOException {
+                    if (s == step) {
+                        throw failure;
+                    }
+                }
+            };
+        }
     }
 
     private static final SecureRandom RANDOM = new SecureRandom();
@@ -60,24 +101,27 @@ final class AtomicFiles {
      */
     static Path writeNew(IntFunction<Path> candidates, int tries, byte[] data, Fault fault) throws IOException {
         Path first = candidates.apply(0).toAbsolutePath();
-        Path temp = writeTemp(first, data, false, AtomicFiles::randomTag);
+        Path temp = writeTemp(first, data, false, AtomicFiles::randomTag, fault);
+        Path written = null;
         try {
-            fault.beforeMove(temp, first);
-            for (int i = 0; i < tries; i++) {
+            fault.before(Step.MOVE, temp, first);
+            for (int i = 0; i < tries && written == null; i++) {
                 Path target = candidates.apply(i).toAbsolutePath();
-                if (Files.exists(target, LinkOption.NOFOLLOW_LINKS)) {
-                    continue;
-                }
-                if (linkOrMove(temp, target)) {
+                if (!Files.exists(target, LinkOption.NOFOLLOW_LINKS) && linkOrMove(temp, target)) {
                     syncFolder(target.getParent());
-                    return target;
+                    written = target;
                 }
             }
-            throw new FileAlreadyExistsException(first.toString(), null,
-                    "it and " + (tries - 1) + " numbered alternatives exist");
-        } finally {
-            Files.deleteIfExists(temp);
+            if (written == null) {
+                throw new FileAlreadyExistsException(first.toString(), null,
+                        "it and " + (tries - 1) + " numbered alternatives exist");
+            }
+        } catch (IOException | RuntimeException | Error e) {
+            removeTemp(temp, e);
+            throw e;
         }
+        removeTemp(temp, null);
+        return written;
     }
 
     /**
@@ -86,14 +130,44 @@ final class AtomicFiles {
      */
     static void replace(Path target, byte[] data, boolean owner, Fault fault) throws IOException {
         Path abs = target.toAbsolutePath();
-        Path temp = writeTemp(abs, data, owner, AtomicFiles::randomTag);
+        Path temp = writeTemp(abs, data, owner, AtomicFiles::randomTag, fault);
         try {
-            fault.beforeMove(temp, abs);
+            fault.before(Step.MOVE, temp, abs);
             Files.move(temp, abs, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
             syncFolder(abs.getParent());
-        } finally {
-            Files.deleteIfExists(temp);
+        } catch (IOException | RuntimeException | Error e) {
+            removeTemp(temp, e);
+            throw e;
         }
+        removeTemp(temp, null);
+    }
+
+    /**
+     * Removes the temporary files that saves killed mid-way left in {@code dir} for targets named
+     * {@code *suffix}: hidden regular files {@code .NAME.TAG.tmp} last modified more than
+     * {@code olderThan} ago (a save in progress elsewhere is seconds old). Best effort: a file that
+     * cannot be removed stays, and is harmless.
+     *
+     * @return how many were removed
+     */
+    static int sweep(Path dir, String suffix, Duration olderThan) {
+        FileTime before = FileTime.from(Instant.now().minus(olderThan));
+        int removed = 0;
+        try (DirectoryStream<Path> s = Files.newDirectoryStream(dir, "." + "*" + suffix + ".*.tmp")) {
+            for (Path p : s) {
+                String tag = p.getFileName().toString();
+                tag = tag.substring(0, tag.length() - ".tmp".length());
+                tag = tag.substring(tag.lastIndexOf('.') + 1);
+                if (tag.matches("[0-9a-f]{12}") && Files.isRegularFile(p, LinkOption.NOFOLLOW_LINKS)
+                        && Files.getLastModifiedTime(p, LinkOption.NOFOLLOW_LINKS).compareTo(before) < 0
+                        && Files.deleteIfExists(p)) {
+                    removed++;
+                }
+            }
+        } catch (IOException | UncheckedIOException e) {
+            // Leftovers are hidden, never listed and never read; they can wait for the next save.
+        }
+        return removed;
     }
 
     /** Hard-links {@code temp} at {@code target} (refuses an existing target); false when taken meanwhile. */
@@ -114,6 +188,22 @@ final class AtomicFiles {
         }
     }
 
+    /**
+     * Removes a temporary file (gone already after a rename, a second name after a hard link). A
+     * failure to remove it never hides {@code failure}, the reason the save failed; it is attached to
+     * it instead.
+     */
+    private static void removeTemp(Path temp, Throwable failure) {
+        try {
+            Files.deleteIfExists(temp);
+        } catch (IOException e) {
+            // After a successful save the data is in place and a stray temporary name is harmless.
+            if (failure != null) {
+                failure.addSuppressed(e);
+            }
+        }
+    }
+
     private static String randomTag() {
         byte[] r = new byte[6];
         RANDOM.nextBytes(r);
@@ -125,6 +215,11 @@ final class AtomicFiles {
      * {@code tags} while a name is taken, by a file or a link alike), writes and syncs {@code data}.
      */
     static Path writeTemp(Path target, byte[] data, boolean owner, Supplier<String> tags) throws IOException {
+        return writeTemp(target, data, owner, tags, Fault.NONE);
+    }
+
+    private static Path writeTemp(Path target, byte[] data, boolean owner, Supplier<String> tags, Fault fault)
+            throws IOException {
         Path dir = target.getParent();
         IOException last = null;
         for (int i = 0; i < NAME_TRIES; i++) {
@@ -133,17 +228,19 @@ final class AtomicFiles {
             try (FileChannel ch = FileChannel.open(temp, Set.of(StandardOpenOption.CREATE_NEW,
                     StandardOpenOption.WRITE, LinkOption.NOFOLLOW_LINKS), attributes(dir, owner))) {
                 created = true;
+                fault.before(Step.WRITE, temp, target);
                 ByteBuffer b = ByteBuffer.wrap(data);
                 while (b.hasRemaining()) {
                     ch.write(b);
                 }
+                fault.before(Step.SYNC, temp, target);
                 ch.force(true);
                 return temp;
             } catch (FileAlreadyExistsException e) {
                 last = e;
             } catch (IOException e) {
                 if (created) {
-                    Files.deleteIfExists(temp);
+                    removeTemp(temp, e);
                 }
                 throw e;
             }

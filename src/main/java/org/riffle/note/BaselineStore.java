@@ -7,6 +7,7 @@ import java.nio.file.Files;
 import java.nio.file.LinkOption;
 import java.nio.file.Path;
 import java.time.Clock;
+import java.time.Duration;
 import java.time.ZoneOffset;
 import java.time.format.DateTimeFormatter;
 import java.util.ArrayList;
@@ -143,14 +144,16 @@ public final class BaselineStore {
         Path first = dir.resolve(ID.format(now) + SUFFIX);
         try {
             Files.createDirectories(dir);
+            AtomicFiles.sweep(dir, SUFFIX, Duration.ofHours(1));
             Path written = AtomicFiles.writeNew(i -> NoteSaver.candidate(first, i), 100,
                     text.getBytes(StandardCharsets.UTF_8), fault);
             return BaselineFile.header(written, KeyLines.parse(written, text, BaselineFile.KIND));
         } catch (FileAlreadyExistsException e) {
             throw new NoteException(first, "100 baselines saved in the same second; wait a second", e);
         } catch (IOException e) {
-            throw new NoteException(dir, "cannot save the baseline (" + e.getMessage() + "); set "
-                    + Folders.BASELINE_ENV + " or --store to a writable folder", e);
+            throw new NoteException(dir, "cannot save the baseline (" + IoReason.of(e) + "); "
+                    + (IoReason.diskFull(e) ? "free some space, or " : "") + "set " + Folders.BASELINE_ENV
+                    + " or --store to a writable folder; the stored baselines are as they were", e);
         }
     }
 

@@ -94,8 +94,8 @@ public final class DraftStore {
             AtomicFiles.replace(state, data, true, fault);
             return state;
         } catch (IOException e) {
-            String why = besideFailure == null ? "" : " nor beside the log (" + besideFailure.getMessage() + ")";
-            throw new NoteException(state, "could not save the draft (" + e.getMessage() + ")" + why
+            String why = besideFailure == null ? "" : " nor beside the log (" + IoReason.of(besideFailure) + ")";
+            throw new NoteException(state, "could not save the draft (" + IoReason.of(e) + ")" + why
                     + "; your comments are still on screen: save the note to another place", e);
         }
     }

@@ -4,7 +4,6 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.AccessDeniedException;
 import java.nio.file.FileAlreadyExistsException;
-import java.nio.file.FileSystemException;
 import java.nio.file.LinkOption;
 import java.nio.file.StandardOpenOption;
 import java.nio.file.Files;
@@ -67,7 +66,7 @@ public final class NoteSaver {
                     LinkOption.NOFOLLOW_LINKS);
             return abs;
         } catch (IOException e) {
-            throw new NoteException(requested, "cannot write into this device or pipe (" + e.getMessage() + ")", e);
+            throw new NoteException(requested, "cannot write into this device or pipe (" + IoReason.of(e) + ")", e);
         }
     }
 
@@ -119,15 +118,13 @@ public final class NoteSaver {
             }
             throw new NoteException(dir, "the folder went away while saving; choose another path"
                     + " (your comments are kept)", e);
-        } catch (FileSystemException e) {
-            if (String.valueOf(e.getReason()).contains("Read-only file system")) {
+        } catch (IOException e) {
+            if (IoReason.refused(e)) {
                 throw cannotWrite(dir, e);
             }
-            throw new NoteException(abs, "could not save the note (" + Text.clean(String.valueOf(e.getMessage()))
-                    + "); check free space or choose another path (your comments are kept)", e);
-        } catch (IOException e) {
-            throw new NoteException(abs, "could not save the note (" + Text.clean(String.valueOf(e.getMessage()))
-                    + "); check free space or choose another path (your comments are kept)", e);
+            throw new NoteException(abs, "could not save the note (" + IoReason.of(e) + "); "
+                    + (IoReason.diskFull(e) ? "free some space or " : "") + "choose another path"
+                    + " (your comments are kept)", e);
         }
     }
 }

@@ -1,9 +1,11 @@
 package org.riffle.log;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTimeoutPreemptively;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.math.BigDecimal;
+import java.time.Duration;
 import java.util.SplittableRandom;
 import org.junit.jupiter.api.Test;
 
@@ -85,5 +87,24 @@ class NumbersTest {
         assertEquals(1772352000250.0, Numbers.parseDouble(b, 0, b.length, false));
         byte[] c = "12,5".getBytes(java.nio.charset.StandardCharsets.US_ASCII);
         assertEquals(12.5, Numbers.parseDouble(c, 0, c.length, true));
+    }
+
+    /**
+     * Found by {@code ReaderFuzzTest}: a cell of a quarter of a million digits followed by a letter
+     * backtracked through the number pattern in time quadratic in its length (minutes). Now linear:
+     * well under a second, and still the JDK's answer for long numbers that are numbers.
+     */
+    @Test
+    void aVeryLongCellIsJudgedInLinearTime() {
+        String digits = "7".repeat(150_000) + "0".repeat(100_000);
+        assertTimeoutPreemptively(Duration.ofSeconds(5), () -> {
+            assertTrue(Float.isNaN(Numbers.parse(digits + "x", false)), "digits then a letter");
+            assertTrue(Float.isNaN(Numbers.parse(digits + ".5e", false)), "a dangling exponent");
+            assertTrue(Float.isNaN(Numbers.parse(digits, false)), "beyond the float range: missing");
+            assertTrue(Float.isNaN(Numbers.parse("1." + digits + "e", true)), "decimal comma, dangling exponent");
+        });
+        assertSameAsJdk("0." + "0".repeat(5_000) + "1e5010");
+        assertSameAsJdk("1" + "0".repeat(30) + ".e-30");
+        assertSameAsJdk(".5" + "0".repeat(40));
     }
 }

@@ -172,4 +172,25 @@ class BaselineStoreTest {
         assertEquals(Path.of("/home/tech/.local/state/riffle/drafts"), Folders.drafts(Map.of(), home));
         assertEquals(Path.of("/s/riffle/drafts"), Folders.drafts(Map.of("XDG_STATE_HOME", "/s"), home));
     }
+
+    @Test
+    void aSaveRemovesTemporaryFilesThatKilledSavesLeftAnHourAgoAndNothingElse() throws Exception {
+        save(store, "P-3");
+        Path folder = root.resolve("P-3");
+        Path stale = Files.writeString(folder.resolve(".20260314-080000.baseline.0123456789ab.tmp"), "half");
+        Path fresh = Files.writeString(folder.resolve(".20260314-091500.baseline.abcdef012345.tmp"), "in progress");
+        Path mine = Files.writeString(folder.resolve(".notes.baseline.old.tmp"), "not riffle's name");
+        java.nio.file.attribute.FileTime twoHoursAgo = java.nio.file.attribute.FileTime.from(
+                Instant.now().minusSeconds(7200));
+        for (Path p : List.of(stale, mine)) {
+            Files.setLastModifiedTime(p, twoHoursAgo);
+        }
+        BaselineStore later = new BaselineStore(root, Clock.fixed(T.plusSeconds(60), ZoneOffset.UTC),
+                AtomicFiles.Fault.NONE);
+        save(later, "P-3");
+        assertFalse(Files.exists(stale), "a killed save's leftover from two hours ago is removed");
+        assertTrue(Files.exists(fresh), "a temporary file seconds old may be a save under way: kept");
+        assertTrue(Files.exists(mine), "a name riffle does not make is not riffle's to remove");
+        assertEquals(2, store.list().baselines().size());
+    }
 }

@@ -11,7 +11,8 @@ import java.time.Duration;
  * to be killed. Not a test; a hand-run tool for the end-to-end test only.
  *
  * <p>Arguments: log, state folder, text file, autosave interval in ms, mode ({@code wait}: type once
- * and wait; {@code churn}: save two versions alternately until killed).
+ * and wait; {@code churn}: save two versions alternately until killed; {@code once}: save the draft
+ * once, print where or the message, and exit).
  */
 public final class DraftChild {
     private DraftChild() {
@@ -22,6 +23,14 @@ public final class DraftChild {
         DraftStore store = DraftStore.inFolder(Path.of(args[1]));
         String text = Files.readString(Path.of(args[2]), StandardCharsets.UTF_8);
         Findings typed = typed(log, text);
+        if (args[4].equals("once")) {
+            try {
+                System.out.println("saved: " + store.save(log, typed));
+            } catch (NoteException e) {
+                System.out.println(e.getMessage());
+            }
+            return;
+        }
         if (args[4].equals("churn")) {
             Findings other = typed.withGeneral("the other version");
             store.save(log, other);
