@@ -17,7 +17,8 @@ import java.util.Set;
 final class Columns {
     /** Distinct values kept for a text column. */
     static final int DISTINCT_CAP = 64;
-    private static final int MAX_ROWS = Integer.MAX_VALUE - 16;
+    /** Most rows an array can hold. */
+    static final int MAX_ROWS = Integer.MAX_VALUE - 16;
 
     final float[][] values;
     double[] seconds;
@@ -42,15 +43,15 @@ final class Columns {
         }
     }
 
-    /** Makes room for row {@link #rows}; false when the table is as big as an array can be. */
-    boolean ensureRoom() {
+    /** Makes room for row {@link #rows}, growing to at most {@code limit} rows; false when full at the limit. */
+    boolean ensureRoom(int limit) {
         if (rows < capacity) {
             return true;
         }
-        if (capacity >= MAX_ROWS) {
+        if (capacity >= Math.min(limit, MAX_ROWS)) {
             return false;
         }
-        int grown = (int) Math.min(MAX_ROWS, capacity + (capacity >> 1) + 16L);
+        int grown = (int) Math.min(Math.min(limit, MAX_ROWS), capacity + (capacity >> 1) + 16L);
         for (int j = 0; j < values.length; j++) {
             if (values[j] != null) {
                 values[j] = Arrays.copyOf(values[j], grown);

@@ -28,8 +28,12 @@ final class TablePass {
     private final Charset charset;
     private final Stamps.Order order;
     private final boolean allGeneral;
+    private final int rowCap;
+    private final int blockCapacity;
+    /** Set once the rows no longer fit {@link #rowCap}: the pass then keeps the reduced form. */
+    Reducer reducer;
     final Columns cols;
-    final RowLines rowLines = new RowLines();
+    RowLines rowLines = new RowLines();
     final Damage damage = new Damage();
     private final Stamps.DayCache days = new Stamps.DayCache();
 
@@ -45,7 +49,12 @@ final class TablePass {
     private double x0 = Double.NaN;
     private String badTimeText;
 
-    TablePass(String file, Layout layout, Charset charset, int capacity, boolean allGeneral) {
+    /**
+     * A pass that keeps every row while at most {@code rowCap} fit, then reduces ({@link Reducer}) with
+     * block statistics of at most {@code blockCapacity} blocks.
+     */
+    TablePass(String file, Layout layout, Charset charset, int capacity, boolean allGeneral, int rowCap,
+              int blockCapacity) {
         this.file = file;
         this.layout = layout;
         this.roles = layout.roles();
@@ -57,11 +66,35 @@ final class TablePass {
         this.charset = charset;
         this.order = layout.order();
         this.allGeneral = allGeneral;
+        this.rowCap = rowCap;
+        this.blockCapacity = blockCapacity;
         boolean[] stored = new boolean[ncols];
         for (int j = 0; j < ncols; j++) {
             stored[j] = roles[j] == Layout.VALUE;
         }
-        this.cols = new Columns(stored, layout.hasTime(), capacity);
+        this.cols = new Columns(stored, layout.hasTime(), Math.min(capacity, rowCap));
+    }
+
+    /** The columns the pass stores (those with numbers), ascending. */
+    int[] valueColumns() {
+        int n = 0;
+        for (float[] v : cols.values) {
+            n += v == null ? 0 : 1;
+        }
+        int[] out = new int[n];
+        for (int j = 0, k = 0; j < cols.values.length; j++) {
+            if (cols.values[j] != null) {
+                out[k++] = j;
+            }
+        }
+        return out;
+    }
+
+    /** Ends the pass: a reduced one puts its latest rows back in file order. */
+    void finish() {
+        if (reducer != null) {
+            rowLines = reducer.finish();
+        }
     }
 
     /** Reads every line from {@code in}, skipping those before the data. */
@@ -78,8 +111,8 @@ final class TablePass {
             if (isBlankOrComment(b, s, e)) {
                 continue;
             }
-            if (!cols.ensureRoom()) {
-                throw new LogException(file, line, 0, "more rows than riffle can hold (" + cols.rows + ")");
+            if (reducer == null && !cols.ensureRoom(rowCap)) {
+                reducer = new Reducer(cols, rowLines, valueColumns(), blockCapacity);
             }
             beginRow(b, s);
             if (allGeneral || in.quoted()) {
@@ -242,8 +275,12 @@ final class TablePass {
             }
             cols.seconds[row] = t;
         }
-        rowLines.note(row, line);
-        cols.rows = row + 1;
+        if (reducer != null) {
+            reducer.commit(line);
+        } else {
+            rowLines.note(row, line);
+            cols.rows = row + 1;
+        }
     }
 
     /** Seconds of this row from the first row's time (elapsed columns: as written); NaN when unreadable. */

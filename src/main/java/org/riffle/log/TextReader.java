@@ -44,19 +44,26 @@ final class TextReader {
                     + " bytes: not a delimited text log (binary data, or no line breaks?)");
         }
         Layout layout = Sniffer.sniff(src.name, lines, opt, whole);
-        TablePass pass = new TablePass(src.name, layout, cs, capacity(src, head, lines.size(), whole), allGeneral);
+        long budget = MemoryBudget.of(opt);
+        int values = layout.valueColumns();
+        int blocks = Blocks.capacityFor(budget, values);
+        int rowCap = MemoryBudget.rowCap(budget, (long) blocks * values * Blocks.BYTES_PER_BLOCK, values,
+                Columns.MAX_ROWS);
+        TablePass pass = new TablePass(src.name, layout, cs, capacity(src, head, lines.size(), whole), allGeneral,
+                rowCap, blocks);
         InputStream body = new SequenceInputStream(
                 new ByteArrayInputStream(head, enc.bomLength(), head.length - enc.bomLength()), src.in);
         LineReader in = new LineReader(body, BUFFER);
         try {
             pass.run(in);
+            pass.finish();
         } catch (LineReader.LineTooLong e) {
             throw new LogException(src.name, e.line, 0, "line is longer than " + LineReader.MAX_LINE
                     + " bytes: not a delimited text log (binary data, or no line breaks?)");
         } catch (IOException e) {
             throw failure(src, e, in.lineNumber());
         }
-        return Assembler.build(src, layout, pass, cs, opt);
+        return Assembler.build(src, layout, pass, cs, opt, budget);
     }
 
     private static LogException failure(Source src, IOException e, long line) {
