@@ -69,6 +69,7 @@ final class ChannelsCommand implements Callable<Integer> {
         Recording rec = LogReader.read(log, read.toReadOptions());
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
+        Reading.announce(rec, err);
         for (String w : rec.source().warnings()) {
             err.println("riffle: " + rec.source().file() + ": warning: " + w);
         }
@@ -81,6 +82,7 @@ final class ChannelsCommand implements Callable<Integer> {
             out.println(rec.source().file() + ": " + rec.rows() + " rows, "
                     + count(rec.channels().size(), "numeric channel") + ", "
                     + count(rec.textChannels().size(), "text channel"));
+            rec.source().reduction().ifPresent(r -> out.println(r.message()));
             ChannelTable.printText(rows, out);
             for (TextChannel t : rec.textChannels()) {
                 out.println("text channel " + t.name() + " (not analysed): " + String.join(", ", t.distinct()));

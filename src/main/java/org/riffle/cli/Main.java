@@ -23,7 +23,8 @@ public final class Main {
             return commandLine(new PrintWriter(new SafeWriter(out), true), e).execute(args);
         } catch (OutOfMemoryError oom) {
             // The arrays that held the log are unreachable once the command has unwound, so there is
-            // room for this line. No reduced streaming form exists yet: the user must raise the heap.
+            // room for this line. A log too large for the heap is read in reduced form (log.Reduction);
+            // this is the last resort when even that, or the analysis of what was kept, does not fit.
             e.println("riffle: not enough memory: the Java heap limit is "
                     + Runtime.getRuntime().maxMemory() / (1024 * 1024) + " MiB; raise it, e.g. java -Xmx4g -jar"
                     + " riffle.jar ..., or split the log into shorter files");

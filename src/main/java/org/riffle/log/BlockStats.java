@@ -93,6 +93,24 @@ public final class BlockStats {
         return count[b];
     }
 
+    /** Each block's smallest sample ({@code NaN} where none is present), a new array. */
+    public double[] minima() {
+        double[] out = new double[min.length];
+        for (int b = 0; b < out.length; b++) {
+            out[b] = min(b);
+        }
+        return out;
+    }
+
+    /** Each block's largest sample ({@code NaN} where none is present), a new array. */
+    public double[] maxima() {
+        double[] out = new double[max.length];
+        for (int b = 0; b < out.length; b++) {
+            out[b] = max(b);
+        }
+        return out;
+    }
+
     /** Samples present in the whole log. */
     public long count() {
         return Arrays.stream(count).sum();

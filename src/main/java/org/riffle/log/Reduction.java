@@ -79,6 +79,15 @@ public record Reduction(long rows, long neededBytes, long budgetBytes, long heap
                 nblocks, per, heapOption());
     }
 
+    /**
+     * The same in fewer words, the most needed first, for a screen's header line: that the log was
+     * reduced, how to read it whole, then which rows were analysed.
+     */
+    public String brief() {
+        return String.format(Locale.ROOT, "REDUCED to fit memory (java %s reads it whole): analysed rows 0-%,d"
+                + " and %,d-%,d of %,d; overview from blocks", heapOption(), head - 1, tailFrom, rows - 1, rows);
+    }
+
     private static long mib(long bytes) {
         return (bytes + MIB - 1) / MIB;
     }
