@@ -79,7 +79,8 @@ final class ChannelsCommand implements Callable<Integer> {
         if (csv) {
             ChannelTable.printCsv(rows, out);
         } else {
-            out.println(rec.source().file() + ": " + rec.rows() + " rows, "
+            out.println(rec.source().file() + ": " + rec.source().reduction().map(r -> r.rows() + " rows ("
+                    + rec.rows() + " kept at full resolution)").orElse(rec.rows() + " rows") + ", "
                     + count(rec.channels().size(), "numeric channel") + ", "
                     + count(rec.textChannels().size(), "text channel"));
             rec.source().reduction().ifPresent(r -> out.println(r.message()));

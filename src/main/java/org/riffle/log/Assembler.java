@@ -83,7 +83,8 @@ final class Assembler {
         String format = layout.dialect().describe() + (src.gzipped ? ", gzip" : "")
                 + (layout.timeText().isEmpty() ? ", no time column" : ", " + layout.timeText());
         Optional<Reduction> reduction = red == null ? Optional.empty() : Optional.of(new Reduction(total,
-                total * (4L * channels.size() + (layout.hasTime() ? 8 : 0)), budget, MemoryBudget.heap(),
+                total * (4L * channels.size() + (layout.hasTime() ? 8 : 0)), budget,
+                MemoryBudget.wholeHeap(total, layout.valueColumns()), MemoryBudget.heap(),
                 red.head(), red.tailFrom(), blocks));
         SourceFacts facts = new SourceFacts(src.name, src.sizeBytes, format, cs.name(), layout.preamble(), warnings,
                 Optional.of(layout.dialect()), reduction);

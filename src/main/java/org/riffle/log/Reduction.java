@@ -15,22 +15,23 @@ import java.util.Optional;
  * <li>for every numeric channel, {@link BlockStats} over all rows: per-block minimum, maximum, mean and
  * count, for the overview and the sparklines.</li>
  * </ul>
- * A log is reduced when its samples would take more than the budget: {@code budgetBytes}, by default a
- * third of the heap free when reading starts (see {@code MemoryBudget}), the rest being left for the
- * copies the reading and the analysis make.
+ * A log is reduced when its rows, with the copies the reading makes and the memory the analysis takes
+ * for each, would not fit the budget: {@code budgetBytes}, by default the heap free when reading starts
+ * less a reserve for the program (see {@code MemoryBudget}).
  *
  * <p>Immutable.
  *
  * @param rows data rows in the whole log
  * @param neededBytes bytes the samples and times of the whole log would take (4 a sample, 8 a time)
- * @param budgetBytes bytes the samples were allowed
+ * @param budgetBytes bytes the reading and the analysis of the kept rows were allowed
+ * @param wholeBytes heap estimated to read and analyse the whole log
  * @param heapBytes the Java heap limit ({@link Runtime#maxMemory()}) when the log was read
  * @param head log rows {@code [0, head)} kept at full resolution
  * @param tailFrom log rows {@code [tailFrom, rows)} kept at full resolution
  * @param blocks block statistics of every numeric channel, in the order of {@link Recording#channels()}
  */
-public record Reduction(long rows, long neededBytes, long budgetBytes, long heapBytes, int head, long tailFrom,
-                       List<BlockStats> blocks) {
+public record Reduction(long rows, long neededBytes, long budgetBytes, long wholeBytes, long heapBytes, int head,
+                       long tailFrom, List<BlockStats> blocks) {
     private static final long MIB = 1L << 20;
     private static final long GIB = 1L << 30;
 
@@ -59,9 +60,9 @@ public record Reduction(long rows, long neededBytes, long budgetBytes, long heap
         return blocks.stream().filter(b -> b.name().equals(name)).findFirst();
     }
 
-    /** The heap to ask for to read the log whole, e.g. {@code "-Xmx4g"}: three times the samples, plus 1 GiB. */
+    /** The heap to ask for to read the log whole, e.g. {@code "-Xmx4g"}: the estimate, rounded up, plus 1 GiB. */
     public String heapOption() {
-        return "-Xmx" + ((3 * neededBytes + GIB - 1) / GIB + 1) + "g";
+        return "-Xmx" + ((wholeBytes + GIB - 1) / GIB + 1) + "g";
     }
 
     /**
@@ -71,12 +72,13 @@ public record Reduction(long rows, long neededBytes, long budgetBytes, long heap
     public String message() {
         int nblocks = blocks.isEmpty() ? 0 : blocks.get(0).blocks();
         long per = blocks.isEmpty() ? 0 : blocks.get(0).rowsPerBlock();
-        return String.format(Locale.ROOT, "REDUCED to fit memory: the %,d rows need about %,d MiB, riffle may use"
-                        + " %,d MiB of its %,d MiB heap; analysed at full resolution: rows 0-%,d (start, baseline)"
-                        + " and %,d-%,d (latest); overview (sparklines, whole-log min/max/mean) from %,d blocks of"
-                        + " %,d rows; to read it whole: java %s -jar riffle.jar ...",
-                rows, mib(neededBytes), mib(budgetBytes), mib(heapBytes), head - 1, tailFrom, rows - 1,
-                nblocks, per, heapOption());
+        return String.format(Locale.ROOT, "REDUCED to fit memory: the %,d rows (%,d MiB of samples) and their"
+                        + " analysis need about %,d MiB, riffle had %,d MiB of its %,d MiB heap; analysed at full"
+                        + " resolution: rows 0-%,d (start, baseline) and %,d-%,d (latest); overview (sparklines,"
+                        + " whole-log min/max/mean) from %,d blocks of %,d rows; to read it whole: java %s -jar"
+                        + " riffle.jar ...",
+                rows, mib(neededBytes), mib(wholeBytes), mib(budgetBytes), mib(heapBytes), head - 1, tailFrom,
+                rows - 1, nblocks, per, heapOption());
     }
 
     /**

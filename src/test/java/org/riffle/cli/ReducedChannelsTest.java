@@ -54,7 +54,7 @@ class ReducedChannelsTest {
         Reading.announce(reduced, new PrintWriter(err));
         String line = err.toString();
         assertEquals(1, line.lines().count(), line);
-        assertTrue(line.startsWith("riffle: " + f + ": REDUCED to fit memory: the 30,000 rows need about"), line);
+        assertTrue(line.startsWith("riffle: " + f + ": REDUCED to fit memory: the 30,000 rows (1 MiB of samples)"), line);
         assertTrue(line.strip().endsWith("to read it whole: java -Xmx2g -jar riffle.jar ..."), line);
         StringWriter none = new StringWriter();
         Reading.announce(whole, new PrintWriter(none));

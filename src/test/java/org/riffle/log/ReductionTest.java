@@ -73,7 +73,7 @@ class ReductionTest {
     void blockStatisticsEqualThoseOfTheWrittenSamples(@TempDir Path dir) throws Exception {
         Data d = new Data(20_011, 11L, 15_000);
         Path f = d.write(dir.resolve("big.csv"), true, false);
-        Recording rec = LogReader.read(f, ReadOptions.defaults().withMemoryBytes(60_000));
+        Recording rec = LogReader.read(f, ReadOptions.defaults().withMemoryBytes(600_000));
         Reduction red = rec.source().reduction().orElseThrow(() -> new AssertionError("not reduced"));
         assertEquals(d.rows, red.rows());
         assertEquals(3, red.blocks().size());
@@ -119,7 +119,7 @@ class ReductionTest {
     void keptRowsAreTheWrittenRowsBitForBit(@TempDir Path dir) throws Exception {
         Data d = new Data(20_011, 12L, 19_500);
         Path f = d.write(dir.resolve("big.csv"), true, false);
-        Recording rec = LogReader.read(f, ReadOptions.defaults().withMemoryBytes(60_000));
+        Recording rec = LogReader.read(f, ReadOptions.defaults().withMemoryBytes(600_000));
         Recording whole = LogReader.read(f, ReadOptions.defaults());
         assertFalse(whole.source().reduction().isPresent(), "the default budget holds 20,011 rows");
         Reduction red = rec.source().reduction().orElseThrow();
@@ -147,7 +147,8 @@ class ReductionTest {
         assertEquals(19_500 + 2, gap.line(), "the header is line 1, log row 0 is line 2");
         assertEquals(2.0, rec.time().rateHz(), 1e-9, "0.5 s steps");
         String m = red.message();
-        assertTrue(m.startsWith("REDUCED to fit memory: the 20,011 rows need about 1 MiB"), m);
+        assertTrue(m.startsWith("REDUCED to fit memory: the 20,011 rows (1 MiB of samples) and their analysis need"
+                + " about 37 MiB, riffle had 1 MiB of its "), m);
         assertTrue(m.contains("rows 0-" + String.format("%,d", red.head() - 1) + " (start, baseline)"), m);
         assertTrue(m.contains("java -Xmx2g -jar riffle.jar"), m);
     }

@@ -69,7 +69,8 @@ class ReducedLogFacesTest {
                 Assessment a = loop.controller.s.sources.get(0).assessment().orElseThrow();
                 String note = NoteWriter.standard().render(a, Findings.EMPTY);
                 String flat = note.replaceAll("\\s+", " ");
-                assertTrue(flat.contains("long-run.csv: REDUCED to fit memory: the 12,000 rows need about 1 MiB"),
+                assertTrue(flat.contains("long-run.csv: REDUCED to fit memory: the 12,000 rows (1 MiB of samples) and their"
+                        + " analysis need about"),
                         note);
                 assertTrue(flat.contains("to read it whole: java -Xmx2g -jar riffle.jar"), note);
                 assertTrue(flat.contains("12000 rows, of which " + rec.rows() + " were kept and analysed"), note);
