@@ -48,6 +48,8 @@ final class TablePass {
     private long t0 = Stamps.FAIL;
     private double x0 = Double.NaN;
     private String badTimeText;
+    /** The decoded text of the row the general path is splitting. */
+    private String generalText = "";
 
     /**
      * A pass that keeps every row while at most {@code rowCap} fit, then reduces ({@link Reducer}) with
@@ -191,6 +193,7 @@ final class TablePass {
             text = text + "\n" + new String(in.buffer(), in.start(), in.end() - in.start(), charset);
         }
         lineBuf = null;
+        generalText = text;
         for (String f : Splitter.split(text, whitespace ? Dialect.WHITESPACE : (char) delim)) {
             byte[] fb = f.getBytes(charset);
             cell(fb, 0, fb.length);
@@ -201,7 +204,7 @@ final class TablePass {
     private void cell(byte[] b, int s, int e) throws LogException {
         int j = cell++;
         if (j >= ncols) {
-            extra(b, s, e);
+            extra(j, b, s, e);
             return;
         }
         switch (roles[j]) {
@@ -244,11 +247,22 @@ final class TablePass {
         }
     }
 
-    private void extra(byte[] b, int s, int e) throws LogException {
+    private void extra(int j, byte[] b, int s, int e) throws LogException {
         for (int i = s; i < e; i++) {
             if (b[i] != ' ' && b[i] != '\t') {
-                long column = lineBuf == null ? 0 : new String(lineBuf, lineStart, s - lineStart, charset).length() + 1;
-                throw new LogException(file, line, column, "more fields than the " + ncols + " columns of the header;"
+                long at = line;
+                long column;
+                if (lineBuf != null) {
+                    column = new String(lineBuf, lineStart, s - lineStart, charset).length() + 1;
+                } else {
+                    // the general path: find the field in the decoded text, which may span lines
+                    int k = Splitter.fieldStart(generalText, whitespace ? Dialect.WHITESPACE : (char) delim, j);
+                    int nl = k < 0 ? -1 : generalText.lastIndexOf('\n', k - 1);
+                    at += k < 0 ? 0 : generalText.substring(0, Math.max(0, nl + 1)).chars().filter(c -> c == '\n')
+                            .count();
+                    column = k < 0 ? 0 : k - nl;
+                }
+                throw new LogException(file, at, column, "more fields than the " + ncols + " columns of the header;"
                         + " check the delimiter (--delimiter) or quote fields that hold it");
             }
         }
