@@ -81,6 +81,26 @@ final class Columns {
         return List.copyOf(distinct.get(j));
     }
 
+    /**
+     * Keeps rows {@code [0, head)} and {@code [tailFrom, tailFrom + tail)}, back to back, in arrays of
+     * exactly {@code head + tail} rows (a reading pass turning to its reduced form).
+     */
+    void keep(int head, int tailFrom, int tail) {
+        int n = head + tail;
+        for (int j = 0; j < values.length; j++) {
+            if (values[j] != null) {
+                System.arraycopy(values[j], tailFrom, values[j], head, tail);
+                values[j] = Arrays.copyOf(values[j], n);
+            }
+        }
+        if (seconds != null) {
+            System.arraycopy(seconds, tailFrom, seconds, head, tail);
+            seconds = Arrays.copyOf(seconds, n);
+        }
+        rows = n;
+        capacity = n;
+    }
+
     /** Cuts every array to {@link #rows}. */
     void trim() {
         for (int j = 0; j < values.length; j++) {

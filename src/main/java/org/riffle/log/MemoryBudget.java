@@ -1,13 +1,14 @@
 package org.riffle.log;
 
 /**
- * How many rows of a log riffle keeps at full resolution before it reads the log in reduced form
- * ({@link Reduction}), so that the reading and the analysis of what is kept both fit the heap.
+ * When riffle reads a log in reduced form ({@link Reduction}) and how many rows it then keeps at full
+ * resolution, so that the reading and the analysis of what is kept both fit the heap.
  *
  * <p>The budget is the heap free when reading starts, less {@link #RESERVE} for the program itself
- * (or {@link ReadOptions#memoryBytes()} when given). Each kept row then costs twice its samples and time
- * while reading (the columns are copied once as they grow or are trimmed) plus {@link #ANALYSIS_PER_ROW}
- * bytes for the analysis: the {@code double} copies of the channels being judged (two at a time) and the
+ * (or {@link ReadOptions#memoryBytes()} when given). A log is read whole while its rows fit at twice
+ * their samples and time (the columns are copied once as they grow or are trimmed): the recording's
+ * own size against the heap, with that margin. Past it the log is reduced, and the rows kept then cost
+ * that plus {@link #ANALYSIS_PER_ROW} bytes each for the analysis: the {@code double} copies of the channels being judged (two at a time) and the
  * engines' working arrays. That figure is measured, not derived: {@code riffle report} of a log of 8
  * channels ran out of a 64 MiB heap with about 300,000 rows kept (samples 14 MiB) and of a 128 MiB heap
  * with 740,000 (35 MiB), and completed with 166,000 rows in 64 MiB and 400,000 in 128 MiB (2 cores,
@@ -52,10 +53,19 @@ final class MemoryBudget {
         return 2 * rowBytes(values) + ANALYSIS_PER_ROW;
     }
 
-    /** Rows that fit {@code budget} after {@code blockBytes} for the block statistics (even, at least {@link #MIN_ROWS}). */
+    /**
+     * Rows read whole when they fit {@code budget} after {@code blockBytes} for the block statistics,
+     * twice their samples and time each (the recording and one copy); more, and the log is reduced.
+     */
     static int rowCap(long budget, long blockBytes, int values, int maxRows) {
-        long rows = (budget - blockBytes) / keptRowBytes(values);
+        long rows = (budget - blockBytes) / (2 * rowBytes(values));
         return (int) Math.max(MIN_ROWS, Math.min(maxRows, rows)) & ~1;
+    }
+
+    /** Rows a reduced log keeps at full resolution: room for the analysis too (at most {@code rowCap}). */
+    static int keepCap(long budget, long blockBytes, int values, int rowCap) {
+        long rows = (budget - blockBytes) / keptRowBytes(values);
+        return (int) Math.max(MIN_ROWS, Math.min(rowCap, rows)) & ~1;
     }
 
     /** The heap that reads and analyses {@code rows} rows of {@code values} columns whole. */

@@ -2,9 +2,9 @@ package org.riffle.log;
 
 /**
  * The reduced form of a reading pass that has filled the memory it may use (see {@link Reduction}). Takes
- * over the full columns at that moment: their first half stays as the head (the start of the log), their
- * second half becomes a ring that always holds the latest rows, and every row, those already read
- * included, goes into the {@link Blocks}. The pass keeps writing each row into {@code cols.rows}, which
+ * over the full columns at that moment and keeps {@code keep} rows of them: the first half as the head
+ * (the start of the log), the second half, the latest rows read, as a ring that always holds the latest
+ * rows; every row, those already read included, goes into the {@link Blocks}. The pass keeps writing each row into {@code cols.rows}, which
  * this class points at the ring slot to overwrite next; {@link #finish()} turns the ring back into file
  * order.
  *
@@ -19,12 +19,16 @@ final class Reducer {
     private final long[] tailLines;
     private long tailSeen;
 
-    /** Starts reducing: {@code cols} is full at {@code cols.rows} rows, read from the lines in {@code lines}. */
-    Reducer(Columns cols, RowLines lines, int[] valueColumns, int blockCapacity) {
+    /**
+     * Starts reducing: {@code cols} is full at {@code cols.rows} rows, read from the lines in
+     * {@code lines}; {@code keep} of them (at most all, at least 2) stay at full resolution.
+     */
+    Reducer(Columns cols, RowLines lines, int[] valueColumns, int blockCapacity, int keep) {
         int cap = cols.rows;
+        int kept = Math.max(2, Math.min(cap, keep));
         this.cols = cols;
-        this.head = cap / 2;
-        this.tail = cap - head;
+        this.head = kept / 2;
+        this.tail = kept - head;
         this.blocks = new Blocks(valueColumns, blockCapacity);
         for (int r = 0; r < cap; r++) {
             blocks.add(cols.values, r);
@@ -32,8 +36,9 @@ final class Reducer {
         this.headLines = lines;
         this.tailLines = new long[tail];
         for (int k = 0; k < tail; k++) {
-            tailLines[k] = lines.line(head + k);
+            tailLines[k] = lines.line(cap - tail + k);
         }
+        cols.keep(head, cap - tail, tail);
         this.tailSeen = tail;
         cols.rows = head;
     }

@@ -29,6 +29,7 @@ final class TablePass {
     private final Stamps.Order order;
     private final boolean allGeneral;
     private final int rowCap;
+    private final int keepRows;
     private final int blockCapacity;
     /** Set once the rows no longer fit {@link #rowCap}: the pass then keeps the reduced form. */
     Reducer reducer;
@@ -52,11 +53,11 @@ final class TablePass {
     private String generalText = "";
 
     /**
-     * A pass that keeps every row while at most {@code rowCap} fit, then reduces ({@link Reducer}) with
-     * block statistics of at most {@code blockCapacity} blocks.
+     * A pass that keeps every row while at most {@code rowCap} fit, then reduces ({@link Reducer}) to
+     * {@code keepRows} rows at full resolution and block statistics of at most {@code blockCapacity} blocks.
      */
     TablePass(String file, Layout layout, Charset charset, int capacity, boolean allGeneral, int rowCap,
-              int blockCapacity) {
+              int keepRows, int blockCapacity) {
         this.file = file;
         this.layout = layout;
         this.roles = layout.roles();
@@ -69,6 +70,7 @@ final class TablePass {
         this.order = layout.order();
         this.allGeneral = allGeneral;
         this.rowCap = rowCap;
+        this.keepRows = keepRows;
         this.blockCapacity = blockCapacity;
         boolean[] stored = new boolean[ncols];
         for (int j = 0; j < ncols; j++) {
@@ -114,7 +116,7 @@ final class TablePass {
                 continue;
             }
             if (reducer == null && !cols.ensureRoom(rowCap)) {
-                reducer = new Reducer(cols, rowLines, valueColumns(), blockCapacity);
+                reducer = new Reducer(cols, rowLines, valueColumns(), blockCapacity, keepRows);
             }
             beginRow(b, s);
             if (allGeneral || in.quoted()) {

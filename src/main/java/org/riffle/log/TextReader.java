@@ -61,10 +61,11 @@ final class TextReader {
         long budget = MemoryBudget.of(opt);
         int values = layout.valueColumns();
         int blocks = Blocks.capacityFor(budget, values);
-        int rowCap = MemoryBudget.rowCap(budget, (long) blocks * values * Blocks.BYTES_PER_BLOCK, values,
-                Columns.MAX_ROWS);
+        long blockBytes = (long) blocks * values * Blocks.BYTES_PER_BLOCK;
+        int rowCap = MemoryBudget.rowCap(budget, blockBytes, values, Columns.MAX_ROWS);
+        int keep = MemoryBudget.keepCap(budget, blockBytes, values, rowCap);
         TablePass pass = new TablePass(src.name, layout, cs, capacity(src, head, lines.size(), whole), allGeneral,
-                rowCap, blocks);
+                rowCap, keep, blocks);
         InputStream body = new SequenceInputStream(
                 new ByteArrayInputStream(head, enc.bomLength(), head.length - enc.bomLength()), src.in);
         LineReader in = new LineReader(body, BUFFER);
