@@ -20,7 +20,10 @@ package org.riffle.log;
 final class MemoryBudget {
     /** Heap left for the program, its libraries and the screen. */
     static final long RESERVE = 16L << 20;
-    /** Bytes the analysis takes for each kept row, whatever the number of channels (see above). */
+    /**
+     * Bytes the analysis takes for each kept row, whatever the number of channels (see above): measured
+     * with two workers; the analysis runs one worker per core, so more cores hold more copies at once.
+     */
     static final int ANALYSIS_PER_ROW = 192;
     /** Fewest rows kept, however short memory is. */
     static final int MIN_ROWS = 64;
@@ -48,9 +51,10 @@ final class MemoryBudget {
         return 4L * values + 16;
     }
 
-    /** Bytes a row costs from reading to the end of the analysis. */
+    /** Bytes a row costs from reading to the end of the analysis, on this machine's cores. */
     static long keptRowBytes(int values) {
-        return 2 * rowBytes(values) + ANALYSIS_PER_ROW;
+        int workers = Math.max(2, Runtime.getRuntime().availableProcessors());
+        return 2 * rowBytes(values) + (long) ANALYSIS_PER_ROW * workers / 2;
     }
 
     /**

@@ -85,10 +85,11 @@ class BigLogIT {
         List<String> lines = r.out().lines().toList();
         assertTrue(lines.get(0).startsWith(log + ": 2000000 rows ("), lines.get(0));
         String said = lines.get(1);
-        assertTrue(said.startsWith("REDUCED to fit memory: the 2,000,000 rows (77 MiB of samples) and their"
-                + " analysis need about 582 MiB, riffle had "), said);
+        // 582 MiB and -Xmx2g on 2 cores; the analysis's share grows with the cores (MemoryBudget)
+        assertTrue(said.matches("REDUCED to fit memory: the 2,000,000 rows \\(77 MiB of samples\\) and their"
+                + " analysis need about [\\d,]+ MiB, riffle had .*"), said);
         assertTrue(said.contains(" of its 64 MiB heap; analysed at full resolution: rows 0-"), said);
-        assertTrue(said.endsWith("to read it whole: java -Xmx2g -jar riffle.jar ..."), said);
+        assertTrue(said.matches(".*; to read it whole: java -Xmx\\d+g -jar riffle\\.jar \\.\\.\\."), said);
         assertEquals(List.of("riffle: " + log + ": " + said), r.err().lines().toList(), "one line on stderr too");
         String[] ch0 = lines.stream().filter(l -> l.startsWith("ch0 ")).findFirst().orElseThrow().split("\\s+");
         assertEquals("2000000", ch0[2], "samples of the whole log");
