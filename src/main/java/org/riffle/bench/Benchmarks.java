@@ -9,6 +9,9 @@ import java.util.List;
  * Stateless.
  */
 final class Benchmarks {
+    /** RQA sizes from which a case runs in a child JVM with a 512 MB heap (issue 3's memory bound). */
+    static final int LARGE_RQA = 50_000;
+
     private Benchmarks() {
     }
 
@@ -17,14 +20,21 @@ final class Benchmarks {
         List<Benchmark> all = new ArrayList<>();
         all.add(ReadBench.read(sizes.rows()));
         for (int n : sizes.rqaVectors()) {
-            all.add(RqaBench.givenRadius(n, threads));
-            all.add(RqaBench.targetRate(n, threads));
+            if (n >= LARGE_RQA) {
+                all.add(new LargeRqaBench(n, false, 512, threads));
+                all.add(new LargeRqaBench(n, true, 512, threads));
+            } else {
+                all.add(RqaBench.givenRadius(n, threads));
+                all.add(RqaBench.targetRate(n, threads));
+            }
         }
         all.add(RqaBench.trend(sizes.trendSamples(), 1_000, 500, threads));
         all.add(ReservoirBench.trainWithSearch(sizes.trainSamples()));
         all.add(ReservoirBench.run(sizes.runSteps()));
         all.add(SpectrumBench.welch(sizes.welchSamples()));
         all.add(new ReportBench(sizes.rows()));
+        all.add(new ScreenChildBench(0));
+        all.add(new ScreenChildBench(sizes.rows()));
         return all;
     }
 }

@@ -23,9 +23,10 @@ final class ChildJvm {
     }
 
     /** The command that starts a riffle JVM with this JVM's java and class path. */
-    static List<String> command(String mainClass, List<String> args) {
+    static List<String> command(List<String> jvmOptions, String mainClass, List<String> args) {
         List<String> cmd = new ArrayList<>();
         cmd.add(Path.of(System.getProperty("java.home"), "bin", "java").toString());
+        cmd.addAll(jvmOptions);
         cmd.add("-cp");
         cmd.add(absoluteClassPath());
         cmd.add(mainClass);
@@ -47,11 +48,17 @@ final class ChildJvm {
      */
     static Run run(String mainClass, List<String> args, Path dir, long timeoutSeconds)
             throws IOException, InterruptedException {
+        return run(List.of(), mainClass, args, dir, timeoutSeconds);
+    }
+
+    /** As {@link #run(String, List, Path, long)}, the child started with {@code jvmOptions}. */
+    static Run run(List<String> jvmOptions, String mainClass, List<String> args, Path dir, long timeoutSeconds)
+            throws IOException, InterruptedException {
         Path out = Files.createTempFile(dir, "child-", ".out");
         Path err = Files.createTempFile(dir, "child-", ".err");
         try {
             long t0 = System.nanoTime();
-            Process p = new ProcessBuilder(command(mainClass, args)).directory(dir.toFile())
+            Process p = new ProcessBuilder(command(jvmOptions, mainClass, args)).directory(dir.toFile())
                     .redirectOutput(out.toFile()).redirectError(err.toFile()).start();
             Path status = Path.of("/proc", Long.toString(p.pid()), "status");
             long deadline = t0 + TimeUnit.SECONDS.toNanos(timeoutSeconds);

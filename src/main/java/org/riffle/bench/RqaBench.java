@@ -45,11 +45,6 @@ final class RqaBench {
     private record Given(double[] x, RqaParams params) {
     }
 
-    /** The warm-up and run caps for N: one measured run from 50,000 vectors on (N = 100,000 takes tens of s). */
-    private static int[] large(int vectors) {
-        return vectors >= 50_000 ? new int[] {0, 1} : new int[] {Integer.MAX_VALUE, Integer.MAX_VALUE};
-    }
-
     /** N vectors with the radius given (chosen once, untimed, for RR ≈ 5 %). */
     static Benchmark givenRadius(int vectors, int threads) {
         Rqa rqa = new Rqa(threads);
@@ -58,7 +53,7 @@ final class RqaBench {
                     double[] x = signal(vectors + 4, 1);
                     double eps = rqa.analyse(x, 0, x.length, PARAMS).radius();
                     return new Given(x, PARAMS.withThreshold(RqaParams.Threshold.radius(eps)));
-                }, g -> rqa.analyse(g.x(), 0, g.x().length, g.params()).rr()).capped(large(vectors));
+                }, g -> rqa.analyse(g.x(), 0, g.x().length, g.params()).rr());
     }
 
     /** N vectors with the exact target-rate search (5 %) included. */
@@ -66,7 +61,7 @@ final class RqaBench {
         Rqa rqa = new Rqa(threads);
         return new Timed<double[]>("RQA N = " + Sizes.count(vectors) + ", target-rate search",
                 targetMillis(vectors, true), dir -> signal(vectors + 4, 1),
-                x -> rqa.analyse(x, 0, x.length, PARAMS).rr()).capped(large(vectors));
+                x -> rqa.analyse(x, 0, x.length, PARAMS).rr());
     }
 
     /** The windowed trend of {@code samples} samples, baseline the first 25 %, target rate 5 %. */

@@ -25,8 +25,6 @@ final class Timed<T> implements Benchmark {
     private final double targetMillis;
     private final SetUp<T> setUp;
     private final Work<T> work;
-    private int maxWarmups = Integer.MAX_VALUE;
-    private int maxRuns = Integer.MAX_VALUE;
     private T input;
     private double sink;
 
@@ -41,23 +39,6 @@ final class Timed<T> implements Benchmark {
     @Override
     public String name() {
         return name;
-    }
-
-    /** Caps the warm-ups and runs of this benchmark; returns it. */
-    Timed<T> capped(int[] warmupsAndRuns) {
-        maxWarmups = warmupsAndRuns[0];
-        maxRuns = warmupsAndRuns[1];
-        return this;
-    }
-
-    @Override
-    public int maxWarmups() {
-        return maxWarmups;
-    }
-
-    @Override
-    public int maxRuns() {
-        return maxRuns;
     }
 
     @Override

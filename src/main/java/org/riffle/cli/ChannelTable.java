@@ -7,6 +7,7 @@ import java.util.function.Function;
 import java.util.Optional;
 import org.riffle.log.BlockStats;
 import org.riffle.log.Channel;
+import org.riffle.log.Printable;
 import org.riffle.log.Recording;
 import org.riffle.log.Reduction;
 import org.riffle.log.TimeIssue;
@@ -119,7 +120,8 @@ final class ChannelTable {
         for (Row r : rows) {
             String[] line = new String[n + 1];
             for (int i = 0; i < n; i++) {
-                line[i] = COLUMNS.get(i).shown().apply(r);
+                // neutralised here, not only on the way out, so the widths are those printed
+                line[i] = Printable.clean(COLUMNS.get(i).shown().apply(r));
             }
             line[n] = r.sparkline();
             cells.add(line);

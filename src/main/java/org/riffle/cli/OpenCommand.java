@@ -13,6 +13,7 @@ import org.riffle.log.Recording;
 import org.riffle.tui.ScreenOptions;
 import org.riffle.tui.TriageScreen;
 import org.riffle.tui.VisitDesk;
+import org.riffle.tui.Warmup;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -49,6 +50,7 @@ final class OpenCommand implements Callable<Integer> {
                     + " a headless command such as 'riffle channels LOG'");
             return ExitCode.NO_TERMINAL;
         }
+        Warmup.start();
         List<Recording> recordings = new ArrayList<>();
         for (Path p : logs) {
             recordings.add(LogReader.read(p, readOptions));

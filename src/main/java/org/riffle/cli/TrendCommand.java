@@ -33,8 +33,8 @@ import picocli.CommandLine.Spec;
                 + " every window measured with the baseline's embedding and radius, reused unchanged; with the"
                 + " reservoir novelty and the window's flag against the baseline."},
         footer = {"", "The embedding is estimated on the baseline unless given; the threshold policy fixes the"
-                + " radius on the baseline (a target rate over the baseline's windows taken together). Sample"
-                + " indices are 0-based, end exclusive; a window with a missing sample prints NaN.",
+                + " radius on the baseline (a target rate over the baseline's windows taken together, at most 64"
+                + " of them evenly spread). Sample indices are 0-based, end exclusive; a window with a missing sample prints NaN.",
                 "novelty: the window's one-step prediction RMS error of the echo state network trained on the"
                 + " baseline, divided by its held-out error there (about 1 on baseline-like data). flag: 1 when"
                 + " the window's judgement is watch or departed, 0 when steady, NaN when the channel has no"

@@ -16,8 +16,8 @@ import java.util.Objects;
  * @param to end of the samples used (exclusive)
  * @param mutualInformation average mutual information I(τ) in nats for τ = 0, 1, …, max delay (empty
  *        when τ was given)
- * @param dimensionCurve for m = 1, 2, …: the false-neighbour fraction (FNN) or Cao's E1(m); empty when
- *        m was given
+ * @param dimensionCurve for m = 1, 2, …: the false-neighbour fraction (FNN, which ends at the first m
+ *        whose fraction is within the limit) or Cao's E1(m); empty when m was given
  * @param search the search parameters used
  */
 public record EmbeddingEstimate(Embedding embedding, String delayMethod, String dimensionMethod, int from, int to,

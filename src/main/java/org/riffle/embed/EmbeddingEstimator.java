@@ -73,7 +73,7 @@ public final class EmbeddingEstimator {
         int m;
         if (search.method() == EmbeddingSearch.Method.FNN) {
             curve = FalseNeighbours.fnn(s, tau, search.maxDimension(), search.rtol(), search.atol(),
-                    search.theiler());
+                    search.theiler(), search.fnnLimit());
             m = chooseFnn(curve, search.fnnLimit());
         } else {
             curve = FalseNeighbours.caoE1(s, tau, search.maxDimension(), search.theiler());

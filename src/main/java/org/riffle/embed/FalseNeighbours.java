@@ -14,12 +14,19 @@ final class FalseNeighbours {
 
     /**
      * The false fraction for m = 1 … maxDim ({@code NaN} where no vector had a usable neighbour); the
-     * curve stops early when too few vectors remain.
+     * curve stops early when too few vectors remain, after the first m whose fraction is at most
+     * {@code stopAt} (higher dimensions cannot change that choice), and once the fraction has stayed more
+     * than {@code stopAt} above its lowest value for two dimensions in a row: the curve of noisy data
+     * rises again past its minimum (Kennel's second criterion flags neighbours that are far apart in
+     * absolute terms), and the higher dimensions are the costliest to search. That last stop is riffle's
+     * own shortcut, not part of the published method. {@code stopAt} NaN computes the whole curve.
      */
-    static double[] fnn(double[] s, int tau, int maxDim, double rtol, double atol, int theiler) {
+    static double[] fnn(double[] s, int tau, int maxDim, double rtol, double atol, int theiler, double stopAt) {
         double ra = std(s);
         double[] out = new double[maxDim];
         int used = 0;
+        double least = Double.POSITIVE_INFINITY;
+        int risen = 0;
         for (int m = 1; m <= maxDim; m++) {
             int count = s.length - m * tau;
             if (count < 2 * theiler + 8) {
@@ -41,6 +48,14 @@ final class FalseNeighbours {
             }
             out[m - 1] = tested > 0 ? (double) fals / tested : Double.NaN;
             used = m;
+            if (out[m - 1] <= stopAt) {
+                break;
+            }
+            least = Math.min(least, out[m - 1]);
+            risen = out[m - 1] > least + stopAt ? risen + 1 : 0;
+            if (risen == 2) {
+                break;
+            }
         }
         return java.util.Arrays.copyOf(out, used);
     }

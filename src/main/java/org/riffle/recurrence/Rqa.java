@@ -93,8 +93,9 @@ public final class Rqa {
      * The windowed trend of a whole channel: windows of {@code window} samples every {@code step}
      * samples from sample 0, each measured with the baseline's embedding (estimated on the baseline when
      * automatic) and the baseline's ε, reused unchanged. On the baseline, a target rate is met over its
-     * windows taken together (over the whole baseline when it is shorter than a window); a fraction of
-     * the standard deviation uses the baseline samples' population standard deviation.
+     * windows taken together, at most 64 of them evenly spread (over the whole baseline when it is
+     * shorter than a window); a fraction of the standard deviation uses the baseline samples' population
+     * standard deviation.
      *
      * @param progress receives the fraction of windows done, from worker threads; may be {@code null}
      * @throws IllegalArgumentException when the baseline or window does not fit the series or the

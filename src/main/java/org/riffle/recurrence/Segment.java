@@ -73,6 +73,12 @@ final class Segment {
      * same arithmetic as {@link #distances}; {@code buf} holds the partial sums.
      */
     void recurrenceBits(int i, int j0, int j1, double[] buf, long tb1, long[] words) {
+        if (m >= 2 && m <= 4) {
+            for (int q0 = j0; q0 < j1; q0 += 64) {
+                words[q0 >>> 6] = word(i, q0, Math.min(64, j1 - q0), tb1);
+            }
+            return;
+        }
         int len = j1 - j0;
         int last = m - 1;
         if (last > 0) {
@@ -98,6 +104,67 @@ final class Segment {
             }
             words[(j0 + q0) >>> 6] = bits;
         }
+    }
+
+    /**
+     * The recurrence bits of cells (i, j0 + t), t &lt; lim ≤ 64, for m = 2, 3 or 4: each cell's distance
+     * is computed whole in registers (same arithmetic and order as {@link #distances}), which is about a
+     * fifth faster than summing coordinate by coordinate through a buffer.
+     */
+    private long word(int i, int j0, int lim, long tb1) {
+        int t1 = tau;
+        int t2 = m > 2 ? 2 * tau : tau;
+        int t3 = m > 3 ? 3 * tau : t2;
+        double a0 = s[i];
+        double a1 = s[i + t1];
+        double a2 = s[i + t2];
+        double a3 = s[i + t3];
+        long bits = 0;
+        if (max) {
+            for (int t = 0; t < lim; t++) {
+                int q = j0 + t;
+                double v = Math.abs(a0 - s[q]);
+                double d = Math.abs(a1 - s[q + t1]);
+                v = d > v ? d : v;
+                if (m > 2) {
+                    d = Math.abs(a2 - s[q + t2]);
+                    v = d > v ? d : v;
+                }
+                if (m > 3) {
+                    d = Math.abs(a3 - s[q + t3]);
+                    v = d > v ? d : v;
+                }
+                bits |= ((Double.doubleToRawLongBits(v) - tb1) >>> 63) << t;
+            }
+        } else if (m == 2) {
+            for (int t = 0; t < lim; t++) {
+                int q = j0 + t;
+                double d0 = a0 - s[q];
+                double d1 = a1 - s[q + t1];
+                double v = d0 * d0 + d1 * d1;
+                bits |= ((Double.doubleToRawLongBits(v) - tb1) >>> 63) << t;
+            }
+        } else if (m == 3) {
+            for (int t = 0; t < lim; t++) {
+                int q = j0 + t;
+                double d0 = a0 - s[q];
+                double d1 = a1 - s[q + t1];
+                double d2 = a2 - s[q + t2];
+                double v = d0 * d0 + d1 * d1 + d2 * d2;
+                bits |= ((Double.doubleToRawLongBits(v) - tb1) >>> 63) << t;
+            }
+        } else {
+            for (int t = 0; t < lim; t++) {
+                int q = j0 + t;
+                double d0 = a0 - s[q];
+                double d1 = a1 - s[q + t1];
+                double d2 = a2 - s[q + t2];
+                double d3 = a3 - s[q + t3];
+                double v = d0 * d0 + d1 * d1 + d2 * d2 + d3 * d3;
+                bits |= ((Double.doubleToRawLongBits(v) - tb1) >>> 63) << t;
+            }
+        }
+        return bits;
     }
 
     /** {@code buf[0, j1 − j0)} = distance values over the first {@code coords} coordinates. */

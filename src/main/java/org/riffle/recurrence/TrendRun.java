@@ -17,6 +17,13 @@ import org.riffle.embed.EmbeddingSearch;
  * <p>Confined to the calling thread; used once.
  */
 final class TrendRun {
+    /**
+     * Most baseline windows a target-rate radius is searched over. Sixty-four windows of a thousand
+     * vectors hold 3·10⁷ distances, so the rate's quantile is pinned far more tightly than the windows
+     * vary among themselves, while a long baseline no longer costs a pass over all its windows.
+     */
+    static final int RADIUS_WINDOWS = 64;
+
     private final Rqa engine;
     private final double[] x;
     private final int baseFrom;
@@ -65,13 +72,23 @@ final class TrendRun {
         return new Trend(p, eps, baseFrom, baseTo, window, step, est, windows(p, eps));
     }
 
-    /** The baseline's windows without gaps; else its longest stretch without gaps. */
+    /**
+     * The baseline's windows without gaps, at most {@link #RADIUS_WINDOWS} of them evenly spread; else
+     * its longest stretch without gaps.
+     */
     private List<Segment> baselineSegments(RqaParams p, int[] clean) {
-        List<Segment> segs = new ArrayList<>();
+        List<Integer> starts = new ArrayList<>();
         for (int s = 0; s + window <= baseTo; s += step) {
             if (s >= baseFrom && Checks.firstNonFinite(x, s, s + window) < 0) {
-                segs.add(new Segment(x, s, s + window, p.embedding(), p.norm()));
+                starts.add(s);
             }
+        }
+        List<Segment> segs = new ArrayList<>();
+        int count = starts.size();
+        int used = Math.min(count, RADIUS_WINDOWS);
+        for (int k = 0; k < used; k++) {
+            int s = starts.get((int) ((long) k * count / used));
+            segs.add(new Segment(x, s, s + window, p.embedding(), p.norm()));
         }
         if (segs.isEmpty()) {
             if (p.embedding().vectors(clean[1] - clean[0]) <= p.theiler()) {

@@ -14,10 +14,10 @@ import java.util.Objects;
  * @param heldOutMse mean of the squared held-out errors (normalised units²)
  * @param validationNrmse held-out RMSE divided by the standard deviation of the targets
  * @param candidates every setting tried, in grid order
- * @param searchStride every how many steps the search used (1 = all)
+ * @param searchSteps steps of the excerpt the search ran on, 0 when it ran on the whole series
  */
 public record OneStepFit(Esn esn, double[] heldOutErrors, double heldOutMse, double validationNrmse,
-                         List<Candidate> candidates, int searchStride) {
+                         List<Candidate> candidates, int searchSteps) {
     public OneStepFit {
         Objects.requireNonNull(esn, "esn");
         heldOutErrors = heldOutErrors.clone();

@@ -6,8 +6,10 @@ import java.util.Arrays;
  * The small automatic search of {@link OneStepTrainer}: a grid of spectral radii, leak rates and ridge
  * penalties, judged on {@code folds} contiguous time blocks of the baseline (each block validated by a
  * readout fitted on the others, with a washout-long gap after the block left out of training).
- * A series longer than {@code searchRows} usable steps is searched on every k-th step only (k chosen
- * so that about {@code searchRows} remain); the final readout uses every step.
+ * A series longer than {@code searchRows} usable steps is searched on {@code folds} stretches spread
+ * evenly over it, of searchRows / folds steps each plus the longest washout; the final readout is
+ * fitted on every step, or every k-th of a baseline longer than {@link OneStepTrainer#FIT_ROWS} steps,
+ * and the held-out errors are computed on every step.
  *
  * <p>Immutable: arrays are copied in and out.
  *

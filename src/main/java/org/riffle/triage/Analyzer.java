@@ -61,10 +61,10 @@ public final class Analyzer {
         List<ChannelAssessment> out = run(recording.channels().size(), i -> {
             Channel c = recording.channels().get(i);
             Summary stats = started(i, c, listener);
-            ChannelModel m = ChannelWork.learn(c, baseline.fromRow(), baseline.toRow(), resets,
+            ChannelWork.Learning m = ChannelWork.learn(c, baseline.fromRow(), baseline.toRow(), resets,
                     recording.time().rateHz(), params, shell.window(), shell.step(),
                     f -> listener.progress(i, "reservoir", 0.05 + 0.8 * f));
-            return finish(i, c, m, shell, baseline, recording, resets, stats, listener);
+            return finish(i, c, m.model(), shell, baseline, recording, resets, stats, listener, m.rqa());
         });
         return new Assessment(recording, baseline, out, sharedParams(shell));
     }
@@ -86,7 +86,7 @@ public final class Analyzer {
             listener.progress(i, "baseline", 0);
             ChannelModel m = ChannelWork.learn(c, baseline.fromRow(), baseline.toRow(), resets,
                     recording.time().rateHz(), params, shell.window(), shell.step(),
-                    f -> listener.progress(i, "baseline", f));
+                    f -> listener.progress(i, "baseline", f)).model();
             listener.progress(i, "baseline", 1);
             return m;
         });
@@ -113,7 +113,7 @@ public final class Analyzer {
             Summary stats = started(i, c, listener);
             ChannelModel m = model.channel(c.name()).orElse(ChannelModel.none(c.name(), c.unit(),
                     "no baseline: the baseline model has no channel named '" + c.name() + "'"));
-            return finish(i, c, m, model, baseline, recording, resets, stats, listener);
+            return finish(i, c, m, model, baseline, recording, resets, stats, listener, Optional.empty());
         });
         return new Assessment(recording, baseline, out, sharedParams(model));
     }
@@ -128,12 +128,14 @@ public final class Analyzer {
 
     private ChannelAssessment finish(int i, Channel c, ChannelModel m, BaselineModel bm, Baseline baseline,
                                      Recording recording, boolean[] resets, Summary stats,
-                                     TriageListener listener) {
+                                     TriageListener listener, Optional<RqaStep.Known> known) {
         listener.progress(i, "judgement", 0.9);
         // vibration figures: filled by the vibration step where the channel is a vibration channel
         Optional<VibrationFigures> vibration = VibrationStep.figures(c, recording.time().rateHz(), baseline,
                 params.vibration());
-        ChannelAssessment a = ChannelWork.assess(c, m, bm, baseline, recording.time(), resets, stats, vibration);
+        ChannelAssessment a = ChannelWork.assess(c, m, bm, baseline, recording.time(), resets, stats, vibration,
+                known);
+        a = ThumbnailStep.attach(a, c, m, bm, baseline, recording.time());
         listener.progress(i, "done", 1);
         listener.updated(i, a);
         return a;
@@ -144,8 +146,8 @@ public final class Analyzer {
         String source = baseline.sameLog() ? baseline.description() + " of " + fileName(recording)
                 : baseline.description();
         RqaParams r = params.rqa();
-        return new BaselineModel(source, baseline, params.windowFor(rows), params.stepFor(rows), params.quantile(),
-                params.sustained(), List.of(), r.norm().word(), r.minLine(), r.minVert(), r.theiler());
+        return new BaselineModel(source, baseline, params.windowFor(rows), params.stepFor(rows, recording.rows()),
+                params.quantile(), params.sustained(), List.of(), r.norm().word(), r.minLine(), r.minVert(), r.theiler());
     }
 
     private static String fileName(Recording r) {

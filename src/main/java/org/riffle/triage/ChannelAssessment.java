@@ -20,10 +20,13 @@ import org.riffle.signal.Summary;
  * @param parameters the method parameters used for this channel, in print order
  * @param notComputed what could not be computed, one line each, with the reason
  * @param complete false while analysis is still filling this in
+ * @param thumbnails recurrence-plot thumbnails, baseline first then latest (see {@link Thumbnail.Span});
+ *     empty when the channel has no recurrence estimate
  */
 public record ChannelAssessment(String name, String unit, Summary stats, Optional<VibrationFigures> vibration,
                                 List<Measure> measures, List<WindowRow> trend, Health health,
-                                List<Param> parameters, List<String> notComputed, boolean complete) {
+                                List<Param> parameters, List<String> notComputed, boolean complete,
+                                List<Thumbnail> thumbnails) {
     public ChannelAssessment {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(unit, "unit");
@@ -34,6 +37,20 @@ public record ChannelAssessment(String name, String unit, Summary stats, Optiona
         trend = List.copyOf(trend);
         parameters = List.copyOf(parameters);
         notComputed = List.copyOf(notComputed);
+        thumbnails = List.copyOf(thumbnails);
+    }
+
+    /** An assessment without thumbnails. */
+    public ChannelAssessment(String name, String unit, Summary stats, Optional<VibrationFigures> vibration,
+                             List<Measure> measures, List<WindowRow> trend, Health health, List<Param> parameters,
+                             List<String> notComputed, boolean complete) {
+        this(name, unit, stats, vibration, measures, trend, health, parameters, notComputed, complete, List.of());
+    }
+
+    /** The same assessment with {@code t} as its thumbnails. */
+    public ChannelAssessment withThumbnails(List<Thumbnail> t) {
+        return new ChannelAssessment(name, unit, stats, vibration, measures, trend, health, parameters, notComputed,
+                complete, t);
     }
 
     /** The measure of that name, if computed. */

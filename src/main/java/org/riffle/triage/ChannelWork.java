@@ -33,8 +33,15 @@ final class ChannelWork {
     private ChannelWork() {
     }
 
+    /**
+     * What learning one channel gave: the model, and the baseline windows' recurrence measures, which a
+     * judgement of the same log reuses instead of measuring them again.
+     */
+    record Learning(ChannelModel model, Optional<RqaStep.Known> rqa) {
+    }
+
     /** Learns channel {@code c} from rows [from, to); {@code resets} marks rows after a time gap (or null). */
-    static ChannelModel learn(Channel c, int from, int to, boolean[] resets, double rateHz, TriageParams p,
+    static Learning learn(Channel c, int from, int to, boolean[] resets, double rateHz, TriageParams p,
                               int window, int step, DoubleConsumer progress) {
         int n = to - from;
         double[] x = c.toDoubles();
@@ -50,10 +57,11 @@ final class ChannelWork {
         Optional<RqaStep.Learned> rqa = outcome.learned();
         if (!problem.isEmpty()) {
             // no judgement, but the recurrence trend can still be shown with the baseline's ε
-            return new ChannelModel(c.name(), c.unit(), problem, s.mean(), s.std(), 1, rateHz,
+            return new Learning(new ChannelModel(c.name(), c.unit(), problem, s.mean(), s.std(), 1, rateHz,
                     rqa.map(RqaStep.Learned::dimension).orElse(0), rqa.map(RqaStep.Learned::delay).orElse(0),
                     rqa.map(RqaStep.Learned::radius).orElse(Double.NaN),
-                    rqa.map(RqaStep.Learned::settings).orElse(""), Optional.empty(), List.of(), Double.NaN, List.of());
+                    rqa.map(RqaStep.Learned::settings).orElse(""), Optional.empty(), List.of(), Double.NaN,
+                    List.of()), rqa.map(RqaStep.Learned::known));
         }
         List<String> notes = new ArrayList<>();
         if (rqa.isEmpty()) {
@@ -85,10 +93,10 @@ final class ChannelWork {
         }
         double independent = (double) w.count() * step / window;
         double alert = Judge.alertLevel(Judge.scores(models, values), p.quantile(), present, independent);
-        return new ChannelModel(c.name(), c.unit(), "", s.mean(), s.std(), d, rateHz / d,
+        return new Learning(new ChannelModel(c.name(), c.unit(), "", s.mean(), s.std(), d, rateHz / d,
                 rqa.map(RqaStep.Learned::dimension).orElse(0), rqa.map(RqaStep.Learned::delay).orElse(0),
                 rqa.map(RqaStep.Learned::radius).orElse(Double.NaN), rqa.map(RqaStep.Learned::settings).orElse(""),
-                nov.model(), Arrays.asList(models), alert, notes);
+                nov.model(), Arrays.asList(models), alert, notes), rqa.map(RqaStep.Learned::known));
     }
 
     /** Why samples summarised by {@code s} (of {@code n} rows) cannot be judged, {@code ""} when they can. */
@@ -107,15 +115,20 @@ final class ChannelWork {
         return "";
     }
 
-    /** Judges channel {@code c} against {@code m}; {@code resets} marks rows after a time gap (or null). */
+    /**
+     * Judges channel {@code c} against {@code m}; {@code resets} marks rows after a time gap (or null);
+     * {@code known} holds trend windows already measured with m's embedding and ε (or is empty).
+     */
     static ChannelAssessment assess(Channel c, ChannelModel m, BaselineModel bm, Baseline b, TimeBase time,
-                                    boolean[] resets, Summary stats, Optional<VibrationFigures> vibration) {
+                                    boolean[] resets, Summary stats, Optional<VibrationFigures> vibration,
+                                    Optional<RqaStep.Known> known) {
         List<Param> params = Reporting.channelParams(m, bm, time);
         int n = c.size();
         double[] x = c.toDoubles();
         Windows w = new Windows(n, bm.window(), bm.step());
         double[][] rqa = m.embeddingDimension() > 0
-                ? RqaStep.trend(x, w, bm.rqa(), m.embeddingDimension(), m.embeddingDelay(), m.rqaRadius())
+                ? RqaStep.trend(x, w, bm.rqa(), m.embeddingDimension(), m.embeddingDelay(), m.rqaRadius(),
+                        known)
                 : null;
         String problem = m.learned() ? problem(stats, n, "channel") : m.noEstimateReason();
         if (problem.isEmpty() && w.count() == 0) {

@@ -70,8 +70,9 @@ final class NoveltyStep {
         }
         Esn esn = fit.esn();
         EsnParams p = esn.reservoir().params();
-        String how = search ? space.describe() + (fit.searchStride() > 1 ? ", searched on every "
-                + fit.searchStride() + "th step" : "") : "fixed (no search)";
+        String how = search ? space.describe() + (fit.searchSteps() > 0 ? ", searched on " + space.folds()
+                + " stretches (" + fit.searchSteps() + " steps) spread over the baseline" : "")
+                : "fixed (no search)";
         ReservoirModel m = new ReservoirModel(p.seed(), p.units(), p.connections(), p.spectralRadius(), p.leak(),
                 p.inputScaling(), p.biasScaling(), p.ridge(), esn.washout(), esn.weights(),
                 esn.reservoir().fingerprint(), fit.heldOutMse(), fit.validationNrmse(), how);

@@ -25,7 +25,12 @@ final class RqaStep {
      * What the baseline gave: the resolved embedding and ε, their description, and the baseline windows'
      * measures [measure][window]; or only a reason.
      */
-    record Learned(int dimension, int delay, double radius, String settings, double[][] baselineValues) {
+    record Learned(int dimension, int delay, double radius, String settings, int firstWindow,
+                   double[][] baselineValues) {
+        /** The baseline windows' measures, for {@link #trend} to reuse. */
+        Known known() {
+            return new Known(firstWindow, baselineValues);
+        }
     }
 
     /** The outcome of learning: the baseline's recurrence figures, or the reason there are none. */
@@ -33,19 +38,22 @@ final class RqaStep {
     }
 
     /**
-     * Learns from the baseline rows [from, to) of channel samples {@code x} (only x[0, to) is read): the
-     * embedding and ε as {@code params} asks, and the measures of the trend windows (grid from sample 0,
-     * {@code length} and {@code step}) that lie inside the baseline, in order.
+     * Learns from the baseline rows [from, to) of channel samples {@code x}: the embedding and ε as
+     * {@code params} asks, and the measures of the trend windows (grid from sample 0, {@code length} and
+     * {@code step}) that lie inside the baseline, in order. The series handed to the engine starts at
+     * the last grid point at or before {@code from}, which keeps the grid and measures at most one window
+     * that is not the baseline's.
      */
     static Outcome learn(double[] x, int from, int to, int length, int step, RqaParams params) {
         try {
-            double[] prefix = to == x.length ? x : Arrays.copyOf(x, to);
-            Trend t = new Rqa(1).trend(prefix, from, to, length, step, params, null);
+            int start = from / step * step;
+            double[] part = Arrays.copyOfRange(x, start, to);
+            Trend t = new Rqa(1).trend(part, from - start, to - start, length, step, params, null);
             RqaParams p = t.params();
             String settings = p.describe() + " → radius " + Reporting.num(t.radius()) + " (fixed on the baseline)";
-            List<RqaResult> inside = t.windows().stream().filter(r -> r.from() >= from).toList();
+            List<RqaResult> inside = t.windows().stream().filter(r -> r.from() >= from - start).toList();
             return new Outcome(Optional.of(new Learned(p.dimension(), p.delay(), t.radius(), settings,
-                    values(inside, inside.size()))), "");
+                    (from + step - 1) / step, values(inside, inside.size()))), "");
         } catch (IllegalArgumentException e) {
             return new Outcome(Optional.empty(), "recurrence measures: " + e.getMessage());
         }
@@ -53,22 +61,58 @@ final class RqaStep {
 
     /**
      * Measures per window of {@code x}: [measure][window], NaN where a window could not be measured;
-     * null when the embedding does not fit at all.
+     * null when the embedding does not fit at all. Windows {@code known.first()} onwards that
+     * {@code known} already holds (the baseline's, measured with the same embedding and ε while
+     * learning) are copied, not measured again.
      */
-    static double[][] trend(double[] x, Windows w, RqaParams settings, int dimension, int delay, double radius) {
+    static double[][] trend(double[] x, Windows w, RqaParams settings, int dimension, int delay, double radius,
+                            Optional<Known> known) {
         RqaParams p = settings.withEmbedding(dimension, delay).withThreshold(RqaParams.Threshold.radius(radius));
+        int a = known.map(Known::first).orElse(w.count());
+        int b = known.map(k -> Math.min(w.count(), k.first() + k.values()[0].length)).orElse(w.count());
+        if (a < 0 || a > b) {
+            a = w.count();
+            b = w.count();
+        }
+        double[][] head = range(x, w, 0, a, p);
+        double[][] tail = range(x, w, b, w.count(), p);
+        if (head == null || tail == null) {
+            return null;
+        }
+        double[][] out = new double[MEASURES + 2][];
+        for (int r = 0; r < out.length; r++) {
+            out[r] = new double[w.count()];
+            System.arraycopy(head[r], 0, out[r], 0, a);
+            if (b > a) {
+                System.arraycopy(known.get().values()[r], 0, out[r], a, b - a);
+            }
+            System.arraycopy(tail[r], 0, out[r], b, w.count() - b);
+        }
+        return out;
+    }
+
+    /** Windows [a, b) of the grid {@code w}: measures [measure][window − a]; null when the embedding does not fit. */
+    private static double[][] range(double[] x, Windows w, int a, int b, RqaParams p) {
+        if (a >= b) {
+            return new double[MEASURES + 2][0];
+        }
+        double[] part = Arrays.copyOfRange(x, w.start(a), w.end(b - 1));
         Rqa rqa = new Rqa(1);
         try {
             // with a fixed radius the engine needs no baseline beyond one window to validate against
-            return values(rqa.trend(x, 0, Math.min(x.length, w.length()), w.length(), w.step(), p, null).windows(),
-                    w.count());
+            return values(rqa.trend(part, 0, Math.min(part.length, w.length()), w.length(), w.step(), p, null)
+                    .windows(), b - a);
         } catch (IllegalArgumentException first) {
             try {
-                return values(rqa.trend(x, 0, x.length, w.length(), w.step(), p, null).windows(), w.count());
+                return values(rqa.trend(part, 0, part.length, w.length(), w.step(), p, null).windows(), b - a);
             } catch (IllegalArgumentException e) {
                 return null;
             }
         }
+    }
+
+    /** Measures of windows {@code first} … of a trend grid, [measure][window − first], known already. */
+    record Known(int first, double[][] values) {
     }
 
     private static double[][] values(List<RqaResult> windows, int count) {

@@ -13,7 +13,8 @@ import org.riffle.signal.VibrationParams;
  * @param threads worker threads, at least 1 (results do not depend on it)
  * @param window trend window in samples (at least 2), 0 for automatic (baseline rows / 16, clamped to
  *     100..1000)
- * @param step trend step in samples, 0 for automatic (half the window)
+ * @param step trend step in samples, 0 for automatic: half the window, or the whole window when half
+ *     steps would give the log more than {@link #HALF_STEP_WINDOWS} windows
  * @param reservoir reservoir settings; with {@code search} its radius, leak and ridge are only the start
  * @param search true to choose spectral radius, leak and ridge by the automatic search on the baseline
  * @param quantile calibration quantile of the baseline windows' scores (0.5 to 0.9999), default 0.99
@@ -27,6 +28,12 @@ public record TriageParams(int baselineFrom, int baselineTo, int threads, int wi
                            VibrationParams vibration) {
     /** Default calibration quantile. */
     public static final double DEFAULT_QUANTILE = 0.99;
+    /**
+     * Most trend windows a log gets from automatic half-window steps; a longer log is stepped a whole
+     * window at a time, which halves the recurrence work of long logs and still gives more than 500
+     * windows, more than a screen can show.
+     */
+    public static final int HALF_STEP_WINDOWS = 1000;
     /** Default number of windows for a sustained departure. */
     public static final int DEFAULT_SUSTAINED = 3;
 
@@ -124,11 +131,16 @@ public record TriageParams(int baselineFrom, int baselineTo, int threads, int wi
 
     /** The trend window for a baseline of {@code baselineRows} rows. */
     public int windowFor(int baselineRows) {
-        return window > 0 ? window : Math.max(100, Math.min(1000, baselineRows / 16));
+        return window > 0 ? window : Math.max(100, Math.min(500, baselineRows / 16));
     }
 
-    /** The trend step for a baseline of {@code baselineRows} rows. */
-    public int stepFor(int baselineRows) {
-        return step > 0 ? step : Math.max(1, windowFor(baselineRows) / 2);
+    /** The trend step for a baseline of {@code baselineRows} rows in a log of {@code rows} rows. */
+    public int stepFor(int baselineRows, int rows) {
+        if (step > 0) {
+            return step;
+        }
+        int w = windowFor(baselineRows);
+        int half = Math.max(1, w / 2);
+        return rows / half > HALF_STEP_WINDOWS ? w : half;
     }
 }

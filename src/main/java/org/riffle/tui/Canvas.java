@@ -20,6 +20,13 @@ final class Canvas {
         PLAIN, BOLD, REVERSE, CAUTION, DEPARTED, WATCH, DIM, BASELINE
     }
 
+    /**
+     * Styled cells by character, style and colour: Lanterna's TextCharacter is immutable, and making one
+     * runs a grapheme break iterator, which was most of a frame's cost at 200 × 60.
+     */
+    private static final java.util.concurrent.ConcurrentHashMap<Integer, TextCharacter> CELLS =
+            new java.util.concurrent.ConcurrentHashMap<>();
+
     private final Screen screen;
     final Glyphs glyphs;
     private final boolean color;
@@ -88,7 +95,13 @@ final class Canvas {
             return;
         }
         char ch = Character.isBmpCodePoint(cp) ? (char) cp : '?';
-        screen.setCharacter(col, row, styled(TextCharacter.fromCharacter(ch)[0], style));
+        int key = ch | style.ordinal() << 16 | (color ? 1 << 24 : 0);
+        TextCharacter tc = CELLS.get(key);
+        if (tc == null) {
+            tc = styled(TextCharacter.fromCharacter(ch)[0], style);
+            CELLS.putIfAbsent(key, tc);
+        }
+        screen.setCharacter(col, row, tc);
     }
 
     /** Paints the rest of row {@code row} from {@code col} with blanks of {@code style}. */

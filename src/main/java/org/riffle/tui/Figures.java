@@ -28,7 +28,7 @@ final class Figures {
     }
 
     static void paint(Canvas c, ScreenState s, Optional<ChannelAssessment> a, int top, int rows) {
-        List<Panel> panels = panels(s, a);
+        List<Panel> panels = panels(s, a, rows, c.glyphs.ascii());
         int colWidth = Math.max(38, c.cols() / Math.max(1, c.cols() / 40));
         int columns = Math.max(1, (c.cols() + 1) / (colWidth + 1));
         int start = Math.floorMod(s.panel, panels.size());
@@ -50,7 +50,7 @@ final class Figures {
         }
     }
 
-    static List<Panel> panels(ScreenState s, Optional<ChannelAssessment> a) {
+    static List<Panel> panels(ScreenState s, Optional<ChannelAssessment> a, int rows, boolean ascii) {
         List<Panel> out = new ArrayList<>();
         if (a.isEmpty()) {
             out.add(new Panel("figures", List.of("analysis still running")));
@@ -59,7 +59,7 @@ final class Figures {
             out.add(new Panel("statistics", stats(x.stats())));
             out.add(new Panel("against baseline", measures(x.measures())));
             x.vibration().ifPresent(v -> out.add(new Panel("severity and spectrum", vibration(v))));
-            out.add(new Panel("recurrence plot", List.of("thumbnail not available for this analysis")));
+            out.add(thumbnails(s, x, rows, ascii));
             List<String> params = new ArrayList<>();
             s.source().assessment().map(Assessment::parameters).orElse(List.of())
                     .forEach(p -> params.add(p.toString()));
@@ -72,6 +72,15 @@ final class Figures {
         String comment = s.remarks.comment(s.ref(s.row()));
         out.add(new Panel("comment (c to edit)", List.of(comment.isEmpty() ? "-" : comment)));
         return out;
+    }
+
+    private static Panel thumbnails(ScreenState s, ChannelAssessment x, int rows, boolean ascii) {
+        if (x.thumbnails().isEmpty()) {
+            return new Panel(ThumbnailPanel.title(x.thumbnails()), List.of(x.complete()
+                    ? "no thumbnail: the channel has no recurrence estimate" : "thumbnail after the analysis"));
+        }
+        return new Panel(ThumbnailPanel.title(x.thumbnails()), ThumbnailPanel.lines(x.thumbnails(), x.unit(),
+                s.source().recording.time(), rows, ascii));
     }
 
     private static List<String> stats(Summary m) {

@@ -28,8 +28,11 @@ public final class ScreenProbe {
      * @param firstFrameEpochMillis wall-clock time the first frame was complete, ms since the epoch
      * @param keyMillis for each key press, ms from posting it to the end of the frame that shows it
      * @param pressesWhileAnalysing how many of the presses were made while analysis was still running
+     * @param analysedEpochMillis wall-clock time the frame showing every channel's finished analysis was
+     *        complete, ms since the epoch
      */
-    public record Timings(long firstFrameEpochMillis, double[] keyMillis, int pressesWhileAnalysing) {
+    public record Timings(long firstFrameEpochMillis, double[] keyMillis, int pressesWhileAnalysing,
+                          long analysedEpochMillis) {
         public Timings {
             keyMillis = keyMillis.clone();
         }
@@ -98,14 +101,35 @@ public final class ScreenProbe {
                 ms[i] = (frameNanos - t0) / 1e6;
             }
         }
+        long analysed = analysed(loop);
         loop.post(new Event.Key(new KeyStroke('c', true, false)));
         ui.join(10_000);
         loop.close();
-        return new Timings(first, ms, busy);
+        return new Timings(first, ms, busy, analysed);
+    }
+
+    /** Waits (up to 10 minutes) for a frame drawn after every source's analysis ended; its time. */
+    private long analysed(ScreenLoop loop) throws InterruptedException {
+        long deadline = System.nanoTime() + TimeUnit.MINUTES.toNanos(10);
+        while (loop.controller.s.sources.stream().anyMatch(Source::running) && System.nanoTime() < deadline) {
+            Thread.sleep(5);
+        }
+        long keys;
+        synchronized (lock) {
+            keys = framesKeys;
+        }
+        // a key press forces a frame, which then shows the finished state
+        loop.post(new Event.Key(new KeyStroke('k', false, false)));
+        synchronized (lock) {
+            while (framesKeys < keys + 1) {
+                lock.wait(10_000);
+            }
+        }
+        return System.currentTimeMillis();
     }
 
     /** Saves nothing. */
-    private static final class NoDesk implements NoteDesk {
+    static final class NoDesk implements NoteDesk {
         @Override
         public Path saveNote(List<Assessment> assessments, Findings findings) {
             throw new UnsupportedOperationException("the probe saves no note");

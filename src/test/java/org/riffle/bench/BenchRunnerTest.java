@@ -146,7 +146,9 @@ class BenchRunnerTest {
     void theRegistryHasEveryBenchmarkOfTheIssueWithItsTarget() {
         List<Benchmark> all = Benchmarks.all(Sizes.full(), 2);
         List<String> names = all.stream().map(Benchmark::name).toList();
-        for (String n : List.of("read CSV 1M rows x 8 ch", "RQA N = 2k, given radius", "RQA N = 100k, target-rate search",
+        for (String n : List.of("read CSV 1M rows x 8 ch", "RQA N = 2k, given radius",
+                "RQA N = 100k, target-rate search (child JVM, -Xmx512m)", "screen, demo log (child JVM)",
+                "screen, 1M rows x 8 ch (child JVM)",
                 "RQA trend 1M samples, W = 1000, S = 500", "reservoir train + search, 20k samples, 200 units",
                 "reservoir run 1M steps, 200 units", "Welch PSD 1M samples", "riffle report, 1M rows x 8 ch (child JVM)")) {
             assertTrue(names.contains(n), n + " in " + names);
@@ -156,8 +158,12 @@ class BenchRunnerTest {
         assertEquals(200, rqa10k.metrics().get(0).target());
         Benchmark rqa20k = all.get(names.indexOf("RQA N = 20k, given radius"));
         assertEquals(320, rqa20k.metrics().get(0).target(), "four times the 80 ms of N = 10,000");
-        Benchmark rqa100k = all.get(names.indexOf("RQA N = 100k, target-rate search"));
+        Benchmark rqa100k = all.get(names.indexOf("RQA N = 100k, target-rate search (child JVM, -Xmx512m)"));
         assertEquals(List.of(0, 1), List.of(rqa100k.maxWarmups(), rqa100k.maxRuns()));
+        Benchmark screen = all.get(names.indexOf("screen, demo log (child JVM)"));
+        assertEquals(List.of(600.0, 50.0), List.of(screen.metrics().get(0).target(), screen.metrics().get(1).target()));
+        Benchmark big = all.get(names.indexOf("screen, 1M rows x 8 ch (child JVM)"));
+        assertEquals(List.of(1500.0, 10000.0), List.of(big.metrics().get(0).target(), big.metrics().get(2).target()));
     }
 
     @Test

@@ -21,7 +21,8 @@ class BenchCommandTest {
         List<String> lines = r.out().lines().toList();
         assertEquals("read CSV 1M rows x 8 ch", lines.get(0));
         assertTrue(lines.contains("riffle report, 1M rows x 8 ch (child JVM)"), r.out());
-        assertEquals(14, lines.size(), r.out());
+        assertTrue(lines.contains("screen, 1M rows x 8 ch (child JVM)"), r.out());
+        assertEquals(16, lines.size(), r.out());
     }
 
     @Test

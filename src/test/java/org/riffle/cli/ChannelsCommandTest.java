@@ -35,6 +35,30 @@ class ChannelsCommandTest {
         Golden.assertMatches("channels-small.expected.txt", r.out());
     }
 
+    /**
+     * A name holding a format character (a right-to-left override, which the reader lets through as
+     * text) is printed in its inert spelling and the columns after it stay aligned.
+     */
+    @Test
+    void aNameThatNeedsNeutralisingKeepsTheTableAligned(@org.junit.jupiter.api.io.TempDir Path dir)
+            throws IOException {
+        Path log = dir.resolve("esc.csv");
+        StringBuilder sb = new StringBuilder("time,\u202ewipe [bar],plain [bar]\n");
+        for (int i = 0; i < 50; i++) {
+            sb.append(i).append(',').append(i % 7).append(',').append(i % 5).append('\n');
+        }
+        Files.writeString(log, sb.toString(), StandardCharsets.UTF_8);
+        MainTest.Run r = MainTest.run("channels", "--ascii", log.toString());
+        assertEquals(0, r.status(), r.err());
+        assertFalse(r.out().contains("\u202e"), r.out());
+        List<String> table = r.out().lines().filter(l -> l.startsWith("channel") || l.contains("bar ")).toList();
+        assertEquals(3, table.size(), r.out());
+        int unitColumn = table.get(0).indexOf("unit");
+        for (String l : table.subList(1, 3)) {
+            assertEquals("bar", l.substring(unitColumn, unitColumn + 3), "unit column aligned in:\n" + r.out());
+        }
+    }
+
     @Test
     void helpTextsMatchTheGoldenText() {
         Golden.assertMatches("riffle-help.expected.txt", MainTest.run("--help").out());

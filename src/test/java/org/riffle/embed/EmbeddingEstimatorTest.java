@@ -21,6 +21,7 @@ class EmbeddingEstimatorTest {
         assertEquals(2, e.embedding().dimension(), e.dimensionCurve().toString());
         assertTrue(e.dimensionCurve().get(0) > 0.5, "most neighbours are false at m = 1: " + e.dimensionCurve());
         assertTrue(e.dimensionCurve().get(1) <= 0.01, e.dimensionCurve().toString());
+        assertEquals(2, e.dimensionCurve().size(), "the curve ends where the fraction reaches the limit");
         assertEquals("false nearest neighbours", e.dimensionMethod());
         assertEquals("given", e.delayMethod());
     }
@@ -117,5 +118,27 @@ class EmbeddingEstimatorTest {
         assertEquals("sample 42 is missing or not finite", b.getMessage());
         IllegalArgumentException c = assertThrows(IllegalArgumentException.class, () -> new Embedding(0, 2));
         assertEquals("embedding dimension 0 must be at least 1", c.getMessage());
+    }
+
+    /**
+     * White noise has no finite embedding: its false fraction falls, then rises again as Kennel's second
+     * criterion flags ever more distant neighbours (from memory: Kennel et al. 1992 added that criterion
+     * so that noise keeps showing false neighbours as m grows). The curve stops after rising twice, with
+     * the same values up to there and the same choice as the whole curve.
+     */
+    @Test
+    void aRisingCurveStopsEarlyWithTheSameChoice() {
+        java.util.SplittableRandom rnd = new java.util.SplittableRandom(5);
+        double[] s = new double[3000];
+        for (int i = 0; i < s.length; i++) {
+            s[i] = rnd.nextGaussian();
+        }
+        double[] whole = FalseNeighbours.fnn(s, 1, 10, 15, 2, 10, Double.NaN);
+        double[] cut = FalseNeighbours.fnn(s, 1, 10, 15, 2, 10, 0.01);
+        assertEquals(10, whole.length);
+        assertTrue(cut.length < whole.length, java.util.Arrays.toString(cut));
+        assertEquals(java.util.Arrays.toString(java.util.Arrays.copyOf(whole, cut.length)),
+                java.util.Arrays.toString(cut));
+        assertEquals(EmbeddingEstimator.chooseFnn(whole, 0.01), EmbeddingEstimator.chooseFnn(cut, 0.01));
     }
 }

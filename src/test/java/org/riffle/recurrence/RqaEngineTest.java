@@ -148,6 +148,34 @@ class RqaEngineTest {
         assertFalse(t.windows().get(0).skipped().length() > 0);
     }
 
+    /**
+     * A long baseline's target-rate radius comes from at most 64 of its windows, evenly spread; checked
+     * against the exact k-th distance over all of its windows (a brute-force sort of every distance):
+     * within 1 % of it, and the rate over all windows within 0.1 percentage points of the target.
+     */
+    @Test
+    void aLongBaselinesRadiusFromSixtyFourWindowsMatchesTheRadiusOverAllOfThem() {
+        double[] x = noisySine(30_100, 21);
+        Trend t = new Rqa(2).trend(x, 0, 30_100, 300, 150, GIVEN, null);
+        int windows = t.windows().size();
+        assertTrue(windows > 3 * TrendRun.RADIUS_WINDOWS, windows + " windows");
+        List<Double> all = new ArrayList<>();
+        Segment[] segs = new Segment[windows];
+        for (int k = 0; k < windows; k++) {
+            segs[k] = new Segment(x, k * 150, k * 150 + 300, GIVEN.embedding(), GIVEN.norm());
+            for (int i = 0; i < segs[k].vectors(); i++) {
+                for (int j = i + 1; j < segs[k].vectors(); j++) {
+                    all.add(Math.sqrt(segs[k].distance(i, j)));
+                }
+            }
+        }
+        double[] d = all.stream().mapToDouble(Double::doubleValue).sorted().toArray();
+        double exact = d[(int) Math.ceil(0.05 * d.length) - 1];
+        assertEquals(exact, t.radius(), 0.01 * exact, "radius from 64 windows against all " + windows);
+        long within = Arrays.stream(d).filter(v -> v <= t.radius()).count();
+        assertEquals(0.05, (double) within / d.length, 0.001, "recurrence rate over every baseline window");
+    }
+
     @Test
     void trendEstimatesTheEmbeddingOnTheBaselineWhenAutomatic() {
         double[] x = noisySine(3000, 8);

@@ -71,6 +71,21 @@ final class Series {
         return new double[][] {u, target};
     }
 
+    /**
+     * NRMSE of {@code esn}'s one-step predictions of u[t + 1] for t in [from, u.length − 1), the
+     * network run over the whole of {@code u}.
+     */
+    static double oneStepNrmse(Esn esn, double[] u, int from) {
+        double[] err = esn.oneStepErrors(u);
+        double[] target = new double[u.length];
+        double[] predicted = new double[u.length];
+        for (int t = from; t < u.length - 1; t++) {
+            target[t] = u[t + 1];
+            predicted[t] = u[t + 1] - err[t];
+        }
+        return nrmse(target, predicted, from, u.length - 1);
+    }
+
     /** Root-mean-square of a − b over [from, to) divided by the standard deviation of a there. */
     static double nrmse(double[] a, double[] b, int from, int to) {
         double mean = 0;

@@ -58,6 +58,19 @@ class AnalyzerTest {
     }
 
     @Test
+    void reusingTheBaselineWindowsGivesTheSameTrendForABaselineOffTheGrid() {
+        // the baseline starts between two window starts and ends mid-log: the windows measured while
+        // learning are reused in place and must equal those a stored model measures afresh
+        Recording r = threeChannels(4000);
+        Analyzer an = new Analyzer(new TriageParams(1040, 3011, 2));
+        Assessment direct = an.assess(r, TriageListener.NONE);
+        Assessment viaModel = an.assess(r, an.learn(r, direct.baseline()), TriageListener.NONE);
+        assertEquals(direct.channels(), viaModel.channels());
+        assertTrue(direct.channels().stream().allMatch(c -> c.trend().stream().anyMatch(w -> !Double.isNaN(w.det()))),
+                "every channel has recurrence measures");
+    }
+
+    @Test
     void aLevelStepIsDepartedWithItsStartAndTheOthersAreSteady() {
         Assessment a = new Analyzer(small(2)).assess(threeChannels(4000), TriageListener.NONE);
         Health b = a.channels().get(1).health();

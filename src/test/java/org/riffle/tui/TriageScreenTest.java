@@ -13,6 +13,8 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.riffle.note.Findings;
+import org.riffle.triage.ChannelAssessment;
+import org.riffle.triage.Thumbnail;
 import org.riffle.triage.TriageParams;
 
 /** The screen on Lanterna's virtual terminal: what is shown, and what keys do. */
@@ -112,7 +114,72 @@ class TriageScreenTest {
         assertTrue(t.contains("cursor 08:46:40 row 1001  value 54.8"), t);
         assertTrue(t.contains("statistics"), t);
         v.press(KeyType.Tab).press(KeyType.Tab);
-        assertTrue(v.text().contains("recurrence plot"), v.text());
+        assertThumbnailsDrawn(v, v.loop.controller.s.sources.get(0).channel(2).orElseThrow(), false);
+    }
+
+    @Test
+    void detailViewDrawsFullSizeThumbnailsWithTheirSpansWhenThereIsRoom() throws Exception {
+        VirtualScreen v = open(120, 40).analysed().type("jj").press(KeyType.Enter).press(KeyType.Tab)
+                .press(KeyType.Tab);
+        ChannelAssessment a = v.loop.controller.s.sources.get(0).channel(2).orElseThrow();
+        assertThumbnailsDrawn(v, a, false);
+        String t = v.text();
+        // windows of 100 rows every 50 from row 0; the baseline is rows 0-500 (the first quarter), so its last
+        // window is rows 400-499: 06:00 + 4000 s to 06:00 + 4990 s; the log's last is rows 1900-1999
+        assertTrue(t.contains(" left  baseline 07:06 to 07:23"), "rows 400-499 at 10 s from 06:00:\n" + t);
+        assertTrue(t.contains(" right latest 11:16 to 11:33"), "rows 1900-1999:\n" + t);
+        assertTrue(t.contains(" radius " + Text.num(a.thumbnails().get(0).radius(), 8).strip() + " (baseline's)"), t);
+    }
+
+    /**
+     * The thumbnail panel shows both of the channel's thumbnails, cell for cell: each plot line, between
+     * its bars, against the 16 × 16 grid read directly (the oracle merges the cells each character
+     * stands for: 1 × 2 at full size, 2 × 4 when halved; half blocks in UTF-8 split the vertical pair).
+     */
+    static void assertThumbnailsDrawn(VirtualScreen v, ChannelAssessment a, boolean ascii) {
+        List<Thumbnail> th = a.thumbnails();
+        assertEquals(List.of(Thumbnail.Span.BASELINE, Thumbnail.Span.LATEST),
+                th.stream().map(Thumbnail::span).toList(), "both thumbnails computed");
+        String text = v.text();
+        List<String> lines = text.lines().toList();
+        int title = -1;
+        for (int r = 0; r < lines.size(); r++) {
+            if (lines.get(r).startsWith("recurrence plot, ")) {
+                title = r;
+            }
+        }
+        assertTrue(title > 0, "no thumbnail panel:\n" + text);
+        String bar = ascii ? "|" : "│";
+        String plots = lines.get(title + 1).substring(1);
+        int side = plots.indexOf(bar, 1) - 1;
+        assertTrue(side == 8 || side == 16, "plot width " + side + ":\n" + text);
+        int fx = 16 / side;
+        int fy = 2 * fx;
+        for (int r = 0; r < 16 / fy; r++) {
+            String line = lines.get(title + 1 + r).substring(1);
+            for (int k = 0; k < 2; k++) {
+                String cells = line.substring(k * (side + 3), k * (side + 3) + side + 2);
+                assertTrue(cells.startsWith(bar) && cells.endsWith(bar), "frame: " + line);
+                for (int c = 0; c < side; c++) {
+                    int yTop = 15 - r * fy;
+                    boolean up = any(th.get(k), c * fx, fx, yTop - fy / 2 + 1, fy / 2);
+                    boolean down = any(th.get(k), c * fx, fx, yTop - fy + 1, fy / 2);
+                    char want = ascii ? (up || down ? '#' : '.') : up && down ? '█' : up ? '▀' : down ? '▄' : ' ';
+                    assertEquals(want, cells.charAt(1 + c), "thumbnail " + k + " line " + r + " cell " + c + ":\n"
+                            + text);
+                }
+            }
+        }
+    }
+
+    private static boolean any(Thumbnail t, int x0, int nx, int y0, int ny) {
+        boolean set = false;
+        for (int x = x0; x < x0 + nx; x++) {
+            for (int y = y0; y < y0 + ny; y++) {
+                set |= t.at(x, y);
+            }
+        }
+        return set;
     }
 
     @Test
@@ -233,7 +300,8 @@ class TriageScreenTest {
     void asciiFormDrawsNothingOutsideAscii() throws Exception {
         VirtualScreen v = new VirtualScreen(List.of(log), 80, 24, true).analysed();
         String list = v.text();
-        String detail = v.type("\n").text();
+        String detail = v.type("\n").press(KeyType.Tab).press(KeyType.Tab).text();
+        assertThumbnailsDrawn(v, v.loop.controller.s.sources.get(0).channel(0).orElseThrow(), true);
         for (String t : new String[] {list, detail}) {
             assertTrue(t.chars().allMatch(c -> c == '\n' || c >= 0x20 && c < 0x7f), t);
         }

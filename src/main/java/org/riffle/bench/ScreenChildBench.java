@@ -1,0 +1,61 @@
+package org.riffle.bench;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+
+/**
+ * The screen opened in a fresh JVM ({@link ScreenBench}), on the bundled demo log or on the harness's
+ * 8-channel CSV: first frame and whole analysis visible, in ms after the JVM's start, and the 95th
+ * percentile of 40 key presses redrawn at 200 × 60 while the analysis ran. Confined to the harness thread.
+ */
+final class ScreenChildBench implements Benchmark {
+    private final int rows;
+    private Path dir;
+    private Path log;
+
+    /** @param rows the harness CSV's rows, or 0 for the demo log */
+    ScreenChildBench(int rows) {
+        this.rows = rows;
+    }
+
+    @Override
+    public String name() {
+        return "screen, " + (rows == 0 ? "demo log" : Sizes.count(rows) + " rows x 8 ch") + " (child JVM)";
+    }
+
+    @Override
+    public List<Metric> metrics() {
+        boolean demo = rows == 0;
+        return List.of(new Metric("first frame", "ms", demo ? ScreenBench.FIRST_FRAME_MS
+                        : rows == ReadBench.ROWS ? ScreenBench.BIG_FIRST_FRAME_MS : Double.NaN),
+                new Metric("key press p95", "ms", ScreenBench.KEY_MS),
+                new Metric("analysis visible", "ms", rows == ReadBench.ROWS ? ScreenBench.BIG_ANALYSED_MS
+                        : Double.NaN));
+    }
+
+    @Override
+    public int maxWarmups() {
+        return rows == 0 ? 1 : 0;
+    }
+
+    @Override
+    public int maxRuns() {
+        return rows == 0 ? 5 : 3;
+    }
+
+    @Override
+    public void setUp(Path workDir) throws Exception {
+        dir = workDir;
+        log = rows == 0 ? Path.of("fixtures", "demo", "af2-process.csv") : Inputs.csv(workDir, rows);
+        if (!Files.isReadable(log)) {
+            throw new IllegalStateException(log + " is not readable: run the bench from the repository's folder");
+        }
+    }
+
+    @Override
+    public double[] runOnce() throws Exception {
+        ScreenBench.Figures f = ScreenBench.child(log, dir);
+        return new double[] {f.firstFrameMs(), f.keyP95Ms(), f.analysedMs()};
+    }
+}
