@@ -70,6 +70,7 @@ final class BaselineCommand implements Callable<Integer> {
                      + "$RIFFLE_BASELINE_DIR, else $XDG_DATA_HOME/riffle/baselines).") Path store)
             throws LogException {
         Recording rec = LogReader.read(log, ReadOptions.defaults());
+        Reading.announce(rec, spec.commandLine().getErr());
         Baseline b;
         if (span == null) {
             b = new Baseline(0, Math.max(1, rec.rows()), "whole log (rows 0-" + rec.rows() + ")");

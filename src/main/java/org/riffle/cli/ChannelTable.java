@@ -4,9 +4,12 @@ import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.function.Function;
+import java.util.Optional;
+import org.riffle.log.BlockStats;
 import org.riffle.log.Channel;
 import org.riffle.log.Printable;
 import org.riffle.log.Recording;
+import org.riffle.log.Reduction;
 import org.riffle.log.TimeIssue;
 import org.riffle.signal.Severity;
 import org.riffle.signal.Sparkline;
@@ -67,17 +70,33 @@ final class ChannelTable {
     private ChannelTable() {
     }
 
-    /** The rows of {@code rec}, sparklines {@code sparkWidth} cells wide, severity as {@code vib} says. */
+    /**
+     * The rows of {@code rec}, sparklines {@code sparkWidth} cells wide, severity as {@code vib} says. Of a
+     * reduced log, the samples, missing, min, max and mean columns and the sparkline cover the whole log
+     * (its block statistics); the other figures the rows kept at full resolution.
+     */
     static List<Row> rows(Recording rec, int sparkWidth, boolean unicode, VibrationParams vib) {
         long gaps = rec.timeIssues().stream().filter(i -> i.kind() == TimeIssue.Kind.GAP).count();
+        Optional<Reduction> red = rec.source().reduction();
         List<Row> rows = new ArrayList<>();
         for (Channel c : rec.channels()) {
             double[] x = c.toDoubles();
-            rows.add(new Row(c, Summary.of(x), rec.time().rateHz(), rec.time().spanSeconds(), gaps,
-                    Sparkline.render(x, sparkWidth, unicode),
+            Optional<BlockStats> b = red.flatMap(r -> r.blocks(c.name()));
+            Summary s = Summary.of(x);
+            String spark = b.map(k -> Sparkline.renderRanges(k.minima(), k.maxima(), sparkWidth, unicode))
+                    .orElseGet(() -> Sparkline.render(x, sparkWidth, unicode));
+            rows.add(new Row(c, b.map(k -> wholeLog(s, k)).orElse(s), rec.time().rateHz(),
+                    rec.time().spanSeconds(), gaps, spark,
                     Vibration.overall(x, rec.time().rateHz(), Unit.parse(c.unit()), vib)));
         }
         return rows;
+    }
+
+    /** {@code kept} with its count, missing, min, max and mean those of the whole log's blocks. */
+    private static Summary wholeLog(Summary kept, BlockStats b) {
+        return new Summary((int) Math.min(Integer.MAX_VALUE, b.count()), (int) Math.min(Integer.MAX_VALUE,
+                b.missing()), b.min(), b.max(), b.mean(), kept.std(), kept.rms(), kept.peak(), kept.crest(),
+                kept.skewness(), kept.kurtosis());
     }
 
     /** The CSV table: a header row, then one row per channel; RFC 4180 quoting where needed. */

@@ -69,6 +69,7 @@ final class ChannelsCommand implements Callable<Integer> {
         Recording rec = LogReader.read(log, read.toReadOptions());
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
+        Reading.announce(rec, err);
         for (String w : rec.source().warnings()) {
             err.println("riffle: " + rec.source().file() + ": warning: " + w);
         }
@@ -78,9 +79,11 @@ final class ChannelsCommand implements Callable<Integer> {
         if (csv) {
             ChannelTable.printCsv(rows, out);
         } else {
-            out.println(rec.source().file() + ": " + rec.rows() + " rows, "
+            out.println(rec.source().file() + ": " + rec.source().reduction().map(r -> r.rows() + " rows ("
+                    + rec.rows() + " kept at full resolution)").orElse(rec.rows() + " rows") + ", "
                     + count(rec.channels().size(), "numeric channel") + ", "
                     + count(rec.textChannels().size(), "text channel"));
+            rec.source().reduction().ifPresent(r -> out.println(r.message()));
             ChannelTable.printText(rows, out);
             for (TextChannel t : rec.textChannels()) {
                 out.println("text channel " + t.name() + " (not analysed): " + String.join(", ", t.distinct()));

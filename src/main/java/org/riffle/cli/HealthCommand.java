@@ -78,10 +78,12 @@ final class HealthCommand implements Callable<Integer> {
         }
         ReadOptions ro = read.toReadOptions();
         Recording rec = only(LogReader.read(log, ro), log);
+        Reading.announce(rec, spec.commandLine().getErr());
         TriageParams tp = TriageParams.defaults();
         Assessment a;
         if (baselineFile != null) {
             Recording base = only(LogReader.read(baselineFile, ro), baselineFile);
+            Reading.announce(base, spec.commandLine().getErr());
             Analyzer an = new Analyzer(tp);
             BaselineModel model = an.learn(base, Baseline.separateLog(baselineFile.toString(), base.rows()));
             a = an.assess(rec, model, TriageListener.NONE);

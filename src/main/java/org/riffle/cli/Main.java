@@ -23,12 +23,27 @@ public final class Main {
             return commandLine(new PrintWriter(new SafeWriter(out), true), e).execute(args);
         } catch (OutOfMemoryError oom) {
             // The arrays that held the log are unreachable once the command has unwound, so there is
-            // room for this line. No reduced streaming form exists yet: the user must raise the heap.
-            e.println("riffle: not enough memory: the Java heap limit is "
-                    + Runtime.getRuntime().maxMemory() / (1024 * 1024) + " MiB; raise it, e.g. java -Xmx4g -jar"
-                    + " riffle.jar ..., or split the log into shorter files");
+            // room for this line. A log too large for the heap is read in reduced form (log.Reduction);
+            // this is the last resort when even that, or the analysis of what was kept, does not fit.
+            e.println(outOfMemory());
             return ExitCode.FAILED;
         }
+    }
+
+    /** The one line for a run that ran out of memory: the heap limit and how to raise it. */
+    static String outOfMemory() {
+        return "riffle: not enough memory: the Java heap limit is " + Runtime.getRuntime().maxMemory() / (1024 * 1024)
+                + " MiB; raise it, e.g. java -Xmx4g -jar riffle.jar ..., or split the log into shorter files";
+    }
+
+    /** True when {@code t} or one of its causes is an {@link OutOfMemoryError} (a worker's, wrapped). */
+    static boolean outOfMemory(Throwable t) {
+        for (Throwable c = t; c != null; c = c.getCause() == c ? null : c.getCause()) {
+            if (c instanceof OutOfMemoryError) {
+                return true;
+            }
+        }
+        return false;
     }
 
     /** The configured command line, for tests and for {@link #run}. */
@@ -41,6 +56,10 @@ public final class Main {
             if (ex instanceof LogException) {
                 e.println("riffle: " + ex.getMessage());
                 return ExitCode.BAD_INPUT;
+            }
+            if (outOfMemory(ex)) {
+                e.println(outOfMemory());
+                return ExitCode.FAILED;
             }
             e.println("riffle: internal error: " + ex + " (set RIFFLE_DEBUG=1 for details; please report)");
             if (System.getenv("RIFFLE_DEBUG") != null) {

@@ -176,7 +176,9 @@ final class ReportCommand implements Callable<Integer> {
     private int single(Judging judging, NoteWriter writer, Findings findings) throws LogException {
         List<Assessment> all = new ArrayList<>();
         for (Path log : logs) {
-            all.add(judging.assess(LogReader.read(log, ReadOptions.defaults())));
+            Recording rec = LogReader.read(log, ReadOptions.defaults());
+            Reading.announce(rec, spec.commandLine().getErr());
+            all.add(judging.assess(rec));
         }
         String note = writer.render(all, findings);
         PrintWriter out = spec.commandLine().getOut();

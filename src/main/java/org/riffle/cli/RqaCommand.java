@@ -51,6 +51,7 @@ final class RqaCommand implements Callable<Integer> {
     public Integer call() throws LogException {
         RqaParams params = rqa.toParams();
         Recording rec = LogReader.read(log, read.toReadOptions());
+        Reading.announce(rec, spec.commandLine().getErr());
         Channel ch = rqa.pick(rec, log);
         int a = from == null ? 0 : from;
         int b = to == null ? ch.size() : to;

@@ -77,6 +77,7 @@ final class SpectrumCommand implements Callable<Integer> {
             }
         }
         Recording rec = LogReader.read(log, read.toReadOptions());
+        Reading.announce(rec, spec.commandLine().getErr());
         Channel c = rec.channel(channel).orElseThrow(() -> new LogException(log, "no numeric channel '" + channel
                 + "'; channels: " + String.join(", ", rec.channels().stream().map(Channel::name).toList())));
         double rate = rec.time().rateHz();

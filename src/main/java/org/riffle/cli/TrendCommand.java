@@ -72,6 +72,7 @@ final class TrendCommand implements Callable<Integer> {
         RqaParams params = rqa.toParams();
         int s = step == null ? Math.max(1, window / 2) : step;
         Recording rec = LogReader.read(log, read.toReadOptions());
+        Reading.announce(rec, spec.commandLine().getErr());
         Channel ch = rqa.pick(rec, log);
         BaselineRange base;
         TriageParams tp;

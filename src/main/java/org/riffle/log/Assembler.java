@@ -19,13 +19,15 @@ final class Assembler {
     private Assembler() {
     }
 
-    static Recording build(Source src, Layout layout, TablePass pass, Charset cs, ReadOptions opt)
+    static Recording build(Source src, Layout layout, TablePass pass, Charset cs, ReadOptions opt, long budget)
             throws LogException {
         Columns cols = pass.cols;
         cols.trim();
         int rows = cols.rows;
+        Reducer red = pass.reducer;
+        long total = red == null ? rows : red.rows();
         List<String> warnings = new ArrayList<>(layout.notes());
-        checkDamage(src.name, layout, pass.damage, rows, warnings);
+        checkDamage(src.name, layout, pass.damage, total, warnings);
         if (rows == 0) {
             throw new LogException(src.name, 0, 0, layout.dialect().header()
                     ? "no data rows under the header (line " + (layout.dataLine() - (layout.dialect().unitsRow() ? 2 : 1))
@@ -34,7 +36,7 @@ final class Assembler {
         TimeBase time;
         List<TimeIssue> issues = List.of();
         if (layout.hasTime()) {
-            TimeAudit.Result audit = TimeAudit.audit(cols.seconds, pass.rowLines);
+            TimeAudit.Result audit = TimeAudit.audit(cols.seconds, pass.rowLines, red == null ? -1 : red.head());
             warnings.addAll(audit.notes());
             issues = audit.issues();
             long first = pass.firstNanos();
@@ -47,24 +49,31 @@ final class Assembler {
             }
         } else {
             time = untimed(rows, layout, opt, warnings);
+            if (red != null) {
+                time = reducedTime(time, red, rows);
+            }
         }
         List<Channel> channels = new ArrayList<>();
         List<TextChannel> texts = new ArrayList<>();
+        List<BlockStats> blocks = new ArrayList<>();
+        int k = -1;
         for (int j = 0; j < layout.columns(); j++) {
             float[] v = cols.values[j];
             if (v == null) {
                 continue;
             }
-            int missing = 0;
-            for (float x : v) {
-                missing += x != x ? 1 : 0;
-            }
+            k++;
+            BlockStats b = red == null ? null : red.blocks().snapshot(k, layout.names()[j]);
+            long present = b != null ? b.count() : rows - missing(v);
             int text = cols.textCells(j);
             String name = layout.names()[j];
-            if (text > rows - missing) {
+            if (text > present) {
                 texts.add(new TextChannel(name, cols.distinct(j)));
             } else {
                 channels.add(Channel.adopt(name, layout.units()[j], v));
+                if (b != null) {
+                    blocks.add(b);
+                }
                 if (text > 0) {
                     warnings.add("column '" + name + "': " + text + " text cells read as missing samples (e.g. '"
                             + cols.distinct(j).get(0) + "')");
@@ -73,9 +82,31 @@ final class Assembler {
         }
         String format = layout.dialect().describe() + (src.gzipped ? ", gzip" : "")
                 + (layout.timeText().isEmpty() ? ", no time column" : ", " + layout.timeText());
+        Optional<Reduction> reduction = red == null ? Optional.empty() : Optional.of(new Reduction(total,
+                total * (4L * channels.size() + (layout.hasTime() ? 8 : 0)), budget,
+                MemoryBudget.wholeHeap(total, layout.valueColumns()), MemoryBudget.heap(),
+                red.head(), red.tailFrom(), blocks));
         SourceFacts facts = new SourceFacts(src.name, src.sizeBytes, format, cs.name(), layout.preamble(), warnings,
-                Optional.of(layout.dialect()));
+                Optional.of(layout.dialect()), reduction);
         return new Recording(facts, time, channels, texts, issues);
+    }
+
+    private static int missing(float[] v) {
+        int missing = 0;
+        for (float x : v) {
+            missing += x != x ? 1 : 0;
+        }
+        return missing;
+    }
+
+    /** The untimed base of a reduced log: each kept row at its own log row (seconds at the rate, or numbers). */
+    private static TimeBase reducedTime(TimeBase regular, Reducer red, int rows) {
+        double[] at = new double[rows];
+        for (int i = 0; i < rows; i++) {
+            long logRow = i < red.head() ? i : red.tailFrom() + (i - red.head());
+            at[i] = regular.isIndexed() ? logRow : logRow / regular.rateHz();
+        }
+        return regular.isIndexed() ? TimeBase.adoptIndexed(at) : TimeBase.adoptExplicit(at, regular.rateHz(), null);
     }
 
     private static TimeBase untimed(int rows, Layout layout, ReadOptions opt, List<String> warnings) {
@@ -97,14 +128,14 @@ final class Assembler {
     }
 
     /** {@code "1 row"}, {@code "2 rows"}: a count with its noun. */
-    private static String rows(int n, String noun) {
+    private static String rows(long n, String noun) {
         return n + " " + noun + (n == 1 ? "" : "s");
     }
 
     /** Refuses more short rows or unreadable times than one per thousand rows (at least one); else warns. */
-    private static void checkDamage(String file, Layout layout, TablePass.Damage d, int rows, List<String> warnings)
+    private static void checkDamage(String file, Layout layout, TablePass.Damage d, long rows, List<String> warnings)
             throws LogException {
-        int allowed = Math.max(1, rows / 1000);
+        long allowed = Math.max(1, rows / 1000);
         int columns = layout.columns();
         if (d.shortRows > allowed) {
             throw new LogException(file, d.firstShortLine, 0, d.firstShortFields + " of " + columns

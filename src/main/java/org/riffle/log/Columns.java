@@ -17,7 +17,8 @@ import java.util.Set;
 final class Columns {
     /** Distinct values kept for a text column. */
     static final int DISTINCT_CAP = 64;
-    private static final int MAX_ROWS = Integer.MAX_VALUE - 16;
+    /** Most rows an array can hold. */
+    static final int MAX_ROWS = Integer.MAX_VALUE - 16;
 
     final float[][] values;
     double[] seconds;
@@ -42,15 +43,15 @@ final class Columns {
         }
     }
 
-    /** Makes room for row {@link #rows}; false when the table is as big as an array can be. */
-    boolean ensureRoom() {
+    /** Makes room for row {@link #rows}, growing to at most {@code limit} rows; false when full at the limit. */
+    boolean ensureRoom(int limit) {
         if (rows < capacity) {
             return true;
         }
-        if (capacity >= MAX_ROWS) {
+        if (capacity >= Math.min(limit, MAX_ROWS)) {
             return false;
         }
-        int grown = (int) Math.min(MAX_ROWS, capacity + (capacity >> 1) + 16L);
+        int grown = (int) Math.min(Math.min(limit, MAX_ROWS), capacity + (capacity >> 1) + 16L);
         for (int j = 0; j < values.length; j++) {
             if (values[j] != null) {
                 values[j] = Arrays.copyOf(values[j], grown);
@@ -78,6 +79,26 @@ final class Columns {
 
     List<String> distinct(int j) {
         return List.copyOf(distinct.get(j));
+    }
+
+    /**
+     * Keeps rows {@code [0, head)} and {@code [tailFrom, tailFrom + tail)}, back to back, in arrays of
+     * exactly {@code head + tail} rows (a reading pass turning to its reduced form).
+     */
+    void keep(int head, int tailFrom, int tail) {
+        int n = head + tail;
+        for (int j = 0; j < values.length; j++) {
+            if (values[j] != null) {
+                System.arraycopy(values[j], tailFrom, values[j], head, tail);
+                values[j] = Arrays.copyOf(values[j], n);
+            }
+        }
+        if (seconds != null) {
+            System.arraycopy(seconds, tailFrom, seconds, head, tail);
+            seconds = Arrays.copyOf(seconds, n);
+        }
+        rows = n;
+        capacity = n;
     }
 
     /** Cuts every array to {@link #rows}. */

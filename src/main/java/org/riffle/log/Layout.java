@@ -47,4 +47,13 @@ record Layout(Dialect dialect, long dataLine, String[] names, String[] units, by
         }
         return false;
     }
+
+    /** Number of columns that hold values (numbers or text), not time. */
+    int valueColumns() {
+        int n = 0;
+        for (byte r : roles) {
+            n += r == VALUE ? 1 : 0;
+        }
+        return n;
+    }
 }

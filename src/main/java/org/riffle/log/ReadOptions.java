@@ -4,6 +4,7 @@ import java.nio.charset.Charset;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.OptionalInt;
+import java.util.OptionalLong;
 
 /**
  * How to read a log where sniffing alone cannot tell, or where the user overrides it. Every field is
@@ -19,12 +20,14 @@ import java.util.OptionalInt;
  * @param sensitivityUnit WAV only: the unit the sensitivity yields
  * @param skipRows number of lines before the table (header or first data row), overriding detection
  * @param unitsRow whether the row under the names holds units, overriding detection
+ * @param memoryBytes the bytes the samples of one log may take before it is read in reduced form
+ *     ({@link Reduction}); empty: a share of the heap free when reading starts ({@link MemoryBudget})
  */
 public record ReadOptions(Optional<Character> delimiter, Optional<Boolean> decimalComma,
                           Optional<Charset> charset, Optional<DateOrder> dateOrder,
                           Optional<String> timeColumn, OptionalDouble sampleRateHz,
                           OptionalDouble sensitivity, Optional<String> sensitivityUnit,
-                          OptionalInt skipRows, Optional<Boolean> unitsRow) {
+                          OptionalInt skipRows, Optional<Boolean> unitsRow, OptionalLong memoryBytes) {
 
     /** Day/month order in numeric dates. */
     public enum DateOrder {
@@ -53,6 +56,19 @@ public record ReadOptions(Optional<Character> delimiter, Optional<Boolean> decim
         if (skipRows.isPresent() && skipRows.getAsInt() < 0) {
             throw new IllegalArgumentException("skip rows " + skipRows.getAsInt() + " is negative");
         }
+        if (memoryBytes.isPresent() && memoryBytes.getAsLong() <= 0) {
+            throw new IllegalArgumentException("memory budget " + memoryBytes.getAsLong() + " bytes is not positive");
+        }
+    }
+
+    /** The options without a memory budget (detect it from the heap). */
+    public ReadOptions(Optional<Character> delimiter, Optional<Boolean> decimalComma,
+                       Optional<Charset> charset, Optional<DateOrder> dateOrder,
+                       Optional<String> timeColumn, OptionalDouble sampleRateHz,
+                       OptionalDouble sensitivity, Optional<String> sensitivityUnit,
+                       OptionalInt skipRows, Optional<Boolean> unitsRow) {
+        this(delimiter, decimalComma, charset, dateOrder, timeColumn, sampleRateHz, sensitivity, sensitivityUnit,
+                skipRows, unitsRow, OptionalLong.empty());
     }
 
     /** The options as first published (without skip rows and units row). */
@@ -72,48 +88,54 @@ public record ReadOptions(Optional<Character> delimiter, Optional<Boolean> decim
 
     public ReadOptions withDelimiter(char d) {
         return new ReadOptions(Optional.of(d), decimalComma, charset, dateOrder, timeColumn, sampleRateHz,
-                sensitivity, sensitivityUnit, skipRows, unitsRow);
+                sensitivity, sensitivityUnit, skipRows, unitsRow, memoryBytes);
     }
 
     public ReadOptions withDecimalComma(boolean comma) {
         return new ReadOptions(delimiter, Optional.of(comma), charset, dateOrder, timeColumn, sampleRateHz,
-                sensitivity, sensitivityUnit, skipRows, unitsRow);
+                sensitivity, sensitivityUnit, skipRows, unitsRow, memoryBytes);
     }
 
     public ReadOptions withCharset(Charset cs) {
         return new ReadOptions(delimiter, decimalComma, Optional.of(cs), dateOrder, timeColumn, sampleRateHz,
-                sensitivity, sensitivityUnit, skipRows, unitsRow);
+                sensitivity, sensitivityUnit, skipRows, unitsRow, memoryBytes);
     }
 
     public ReadOptions withDateOrder(DateOrder order) {
         return new ReadOptions(delimiter, decimalComma, charset, Optional.of(order), timeColumn, sampleRateHz,
-                sensitivity, sensitivityUnit, skipRows, unitsRow);
+                sensitivity, sensitivityUnit, skipRows, unitsRow, memoryBytes);
     }
 
     public ReadOptions withTimeColumn(String column) {
         return new ReadOptions(delimiter, decimalComma, charset, dateOrder, Optional.of(column), sampleRateHz,
-                sensitivity, sensitivityUnit, skipRows, unitsRow);
+                sensitivity, sensitivityUnit, skipRows, unitsRow, memoryBytes);
     }
 
     public ReadOptions withSampleRate(double hz) {
         return new ReadOptions(delimiter, decimalComma, charset, dateOrder, timeColumn, OptionalDouble.of(hz),
-                sensitivity, sensitivityUnit, skipRows, unitsRow);
+                sensitivity, sensitivityUnit, skipRows, unitsRow, memoryBytes);
     }
 
     public ReadOptions withSensitivity(double perFullScale, String unit) {
         return new ReadOptions(delimiter, decimalComma, charset, dateOrder, timeColumn, sampleRateHz,
-                OptionalDouble.of(perFullScale), Optional.of(unit), skipRows, unitsRow);
+                OptionalDouble.of(perFullScale), Optional.of(unit), skipRows, unitsRow, memoryBytes);
     }
 
     /** Lines to skip before the table (header or first data row). */
     public ReadOptions withSkipRows(int rows) {
         return new ReadOptions(delimiter, decimalComma, charset, dateOrder, timeColumn, sampleRateHz,
-                sensitivity, sensitivityUnit, OptionalInt.of(rows), unitsRow);
+                sensitivity, sensitivityUnit, OptionalInt.of(rows), unitsRow, memoryBytes);
     }
 
     /** Whether the row under the names holds units. */
     public ReadOptions withUnitsRow(boolean present) {
         return new ReadOptions(delimiter, decimalComma, charset, dateOrder, timeColumn, sampleRateHz,
-                sensitivity, sensitivityUnit, skipRows, Optional.of(present));
+                sensitivity, sensitivityUnit, skipRows, Optional.of(present), memoryBytes);
+    }
+
+    /** The bytes the samples may take before the log is read in reduced form (tests, small machines). */
+    public ReadOptions withMemoryBytes(long bytes) {
+        return new ReadOptions(delimiter, decimalComma, charset, dateOrder, timeColumn, sampleRateHz,
+                sensitivity, sensitivityUnit, skipRows, unitsRow, OptionalLong.of(bytes));
     }
 }

@@ -113,6 +113,40 @@ final class Splitter {
         }
     }
 
+    /**
+     * The index in {@code line} where field {@code field} (0-based) begins, as {@link #split} counts
+     * fields (a doubled quote inside quotes toggles twice, which changes nothing); -1 when there are
+     * fewer fields. For whitespace-aligned columns a field begins at its first non-blank character.
+     */
+    static int fieldStart(String line, char delimiter, int field) {
+        boolean ws = delimiter == Dialect.WHITESPACE;
+        boolean inQuotes = false;
+        int seen = ws ? -1 : 0;
+        boolean inField = false;
+        if (!ws && field == 0) {
+            return 0;
+        }
+        for (int i = 0; i < line.length(); i++) {
+            char c = line.charAt(i);
+            if (c == '"') {
+                inQuotes = !inQuotes;
+            }
+            if (inQuotes && c != '"') {
+                continue;
+            }
+            if (ws) {
+                boolean blank = !inQuotes && (c == ' ' || c == '\t');
+                if (!blank && !inField && ++seen == field) {
+                    return i;
+                }
+                inField = !blank;
+            } else if (!inQuotes && c == delimiter && ++seen == field) {
+                return i + 1;
+            }
+        }
+        return -1;
+    }
+
     /** Number of double quotes in {@code s}: odd means a quoted field continues on the next line. */
     static int quotes(CharSequence s) {
         int n = 0;

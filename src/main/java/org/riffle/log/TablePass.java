@@ -28,8 +28,13 @@ final class TablePass {
     private final Charset charset;
     private final Stamps.Order order;
     private final boolean allGeneral;
+    private final int rowCap;
+    private final int keepRows;
+    private final int blockCapacity;
+    /** Set once the rows no longer fit {@link #rowCap}: the pass then keeps the reduced form. */
+    Reducer reducer;
     final Columns cols;
-    final RowLines rowLines = new RowLines();
+    RowLines rowLines = new RowLines();
     final Damage damage = new Damage();
     private final Stamps.DayCache days = new Stamps.DayCache();
 
@@ -44,8 +49,15 @@ final class TablePass {
     private long t0 = Stamps.FAIL;
     private double x0 = Double.NaN;
     private String badTimeText;
+    /** The decoded text of the row the general path is splitting. */
+    private String generalText = "";
 
-    TablePass(String file, Layout layout, Charset charset, int capacity, boolean allGeneral) {
+    /**
+     * A pass that keeps every row while at most {@code rowCap} fit, then reduces ({@link Reducer}) to
+     * {@code keepRows} rows at full resolution and block statistics of at most {@code blockCapacity} blocks.
+     */
+    TablePass(String file, Layout layout, Charset charset, int capacity, boolean allGeneral, int rowCap,
+              int keepRows, int blockCapacity) {
         this.file = file;
         this.layout = layout;
         this.roles = layout.roles();
@@ -57,11 +69,36 @@ final class TablePass {
         this.charset = charset;
         this.order = layout.order();
         this.allGeneral = allGeneral;
+        this.rowCap = rowCap;
+        this.keepRows = keepRows;
+        this.blockCapacity = blockCapacity;
         boolean[] stored = new boolean[ncols];
         for (int j = 0; j < ncols; j++) {
             stored[j] = roles[j] == Layout.VALUE;
         }
-        this.cols = new Columns(stored, layout.hasTime(), capacity);
+        this.cols = new Columns(stored, layout.hasTime(), Math.min(capacity, rowCap));
+    }
+
+    /** The columns the pass stores (those with numbers), ascending. */
+    int[] valueColumns() {
+        int n = 0;
+        for (float[] v : cols.values) {
+            n += v == null ? 0 : 1;
+        }
+        int[] out = new int[n];
+        for (int j = 0, k = 0; j < cols.values.length; j++) {
+            if (cols.values[j] != null) {
+                out[k++] = j;
+            }
+        }
+        return out;
+    }
+
+    /** Ends the pass: a reduced one puts its latest rows back in file order. */
+    void finish() {
+        if (reducer != null) {
+            rowLines = reducer.finish();
+        }
     }
 
     /** Reads every line from {@code in}, skipping those before the data. */
@@ -78,8 +115,8 @@ final class TablePass {
             if (isBlankOrComment(b, s, e)) {
                 continue;
             }
-            if (!cols.ensureRoom()) {
-                throw new LogException(file, line, 0, "more rows than riffle can hold (" + cols.rows + ")");
+            if (reducer == null && !cols.ensureRoom(rowCap)) {
+                reducer = new Reducer(cols, rowLines, valueColumns(), blockCapacity, keepRows);
             }
             beginRow(b, s);
             if (allGeneral || in.quoted()) {
@@ -158,6 +195,7 @@ final class TablePass {
             text = text + "\n" + new String(in.buffer(), in.start(), in.end() - in.start(), charset);
         }
         lineBuf = null;
+        generalText = text;
         for (String f : Splitter.split(text, whitespace ? Dialect.WHITESPACE : (char) delim)) {
             byte[] fb = f.getBytes(charset);
             cell(fb, 0, fb.length);
@@ -168,7 +206,7 @@ final class TablePass {
     private void cell(byte[] b, int s, int e) throws LogException {
         int j = cell++;
         if (j >= ncols) {
-            extra(b, s, e);
+            extra(j, b, s, e);
             return;
         }
         switch (roles[j]) {
@@ -211,11 +249,22 @@ final class TablePass {
         }
     }
 
-    private void extra(byte[] b, int s, int e) throws LogException {
+    private void extra(int j, byte[] b, int s, int e) throws LogException {
         for (int i = s; i < e; i++) {
             if (b[i] != ' ' && b[i] != '\t') {
-                long column = lineBuf == null ? 0 : new String(lineBuf, lineStart, s - lineStart, charset).length() + 1;
-                throw new LogException(file, line, column, "more fields than the " + ncols + " columns of the header;"
+                long at = line;
+                long column;
+                if (lineBuf != null) {
+                    column = new String(lineBuf, lineStart, s - lineStart, charset).length() + 1;
+                } else {
+                    // the general path: find the field in the decoded text, which may span lines
+                    int k = Splitter.fieldStart(generalText, whitespace ? Dialect.WHITESPACE : (char) delim, j);
+                    int nl = k < 0 ? -1 : generalText.lastIndexOf('\n', k - 1);
+                    at += k < 0 ? 0 : generalText.substring(0, Math.max(0, nl + 1)).chars().filter(c -> c == '\n')
+                            .count();
+                    column = k < 0 ? 0 : k - nl;
+                }
+                throw new LogException(file, at, column, "more fields than the " + ncols + " columns of the header;"
                         + " check the delimiter (--delimiter) or quote fields that hold it");
             }
         }
@@ -242,8 +291,12 @@ final class TablePass {
             }
             cols.seconds[row] = t;
         }
-        rowLines.note(row, line);
-        cols.rows = row + 1;
+        if (reducer != null) {
+            reducer.commit(line);
+        } else {
+            rowLines.note(row, line);
+            cols.rows = row + 1;
+        }
     }
 
     /** Seconds of this row from the first row's time (elapsed columns: as written); NaN when unreadable. */

@@ -10,15 +10,20 @@ import java.util.ArrayList;
 import java.util.List;
 
 /**
- * Reads a delimited text log: takes the first {@link #HEAD} bytes to choose the encoding and sniff the
- * layout, then streams every line once through a {@link TablePass} and hands the columns to
+ * Reads a delimited text log: takes the first {@link #HEAD} bytes (more, up to the longest line allowed,
+ * until they hold {@link #HEAD_LINES} lines: a log of thousands of columns) to choose the encoding and
+ * sniff the layout, then streams every line once through a {@link TablePass} and hands the columns to
  * {@link Assembler}.
  *
  * <p>Stateless and thread-safe.
  */
 final class TextReader {
-    /** Bytes looked at before reading: one more than the longest line allowed. */
-    static final int HEAD = LineReader.MAX_LINE + 1;
+    /** Bytes looked at before reading, at first: enough for hundreds of lines of an ordinary log. */
+    static final int HEAD = 1 << 18;
+    /** Complete lines the head must hold (preamble, header, units, data rows), read on for wide logs. */
+    static final int HEAD_LINES = 16;
+    /** Most bytes looked at before reading: one more than the longest line allowed. */
+    static final int MAX_HEAD = LineReader.MAX_LINE + 1;
     private static final int BUFFER = 1 << 20;
 
     private TextReader() {
@@ -26,12 +31,21 @@ final class TextReader {
 
     static Recording read(Source src, ReadOptions opt, boolean allGeneral) throws LogException {
         byte[] head;
+        boolean whole;
         try {
             head = src.in.readNBytes(HEAD);
+            whole = head.length < HEAD;
+            while (!whole && head.length < MAX_HEAD && newlines(head) < HEAD_LINES) {
+                int want = Math.min(MAX_HEAD, 2 * head.length) - head.length;
+                byte[] more = src.in.readNBytes(want);
+                whole = more.length < want;
+                byte[] grown = java.util.Arrays.copyOf(head, head.length + more.length);
+                System.arraycopy(more, 0, grown, head.length, more.length);
+                head = grown;
+            }
         } catch (IOException e) {
             throw failure(src, e, 0);
         }
-        boolean whole = head.length < HEAD;
         Encodings.Choice enc = Encodings.choose(src.name, head, head.length, opt.charset(), whole);
         Charset cs = enc.charset();
         if (whole && head.length == enc.bomLength() && enc.bomLength() > 0) {
@@ -44,19 +58,35 @@ final class TextReader {
                     + " bytes: not a delimited text log (binary data, or no line breaks?)");
         }
         Layout layout = Sniffer.sniff(src.name, lines, opt, whole);
-        TablePass pass = new TablePass(src.name, layout, cs, capacity(src, head, lines.size(), whole), allGeneral);
+        long budget = MemoryBudget.of(opt);
+        int values = layout.valueColumns();
+        int blocks = Blocks.capacityFor(budget, values);
+        long blockBytes = (long) blocks * values * Blocks.BYTES_PER_BLOCK;
+        int rowCap = MemoryBudget.rowCap(budget, blockBytes, values, Columns.MAX_ROWS);
+        int keep = MemoryBudget.keepCap(budget, blockBytes, values, rowCap);
+        TablePass pass = new TablePass(src.name, layout, cs, capacity(src, head, lines.size(), whole), allGeneral,
+                rowCap, keep, blocks);
         InputStream body = new SequenceInputStream(
                 new ByteArrayInputStream(head, enc.bomLength(), head.length - enc.bomLength()), src.in);
         LineReader in = new LineReader(body, BUFFER);
         try {
             pass.run(in);
+            pass.finish();
         } catch (LineReader.LineTooLong e) {
             throw new LogException(src.name, e.line, 0, "line is longer than " + LineReader.MAX_LINE
                     + " bytes: not a delimited text log (binary data, or no line breaks?)");
         } catch (IOException e) {
             throw failure(src, e, in.lineNumber());
         }
-        return Assembler.build(src, layout, pass, cs, opt);
+        return Assembler.build(src, layout, pass, cs, opt, budget);
+    }
+
+    private static int newlines(byte[] b) {
+        int n = 0;
+        for (byte x : b) {
+            n += x == '\n' ? 1 : 0;
+        }
+        return n;
     }
 
     private static LogException failure(Source src, IOException e, long line) {

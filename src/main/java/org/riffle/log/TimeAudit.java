@@ -29,6 +29,14 @@ final class TimeAudit {
     }
 
     static Result audit(double[] t, RowLines lines) {
+        return audit(t, lines, -1);
+    }
+
+    /**
+     * As {@link #audit(double[], RowLines)}, leaving out the step into row {@code join} (where a reduced
+     * log's two windows meet; -1 for none): it is no step of the clock.
+     */
+    static Result audit(double[] t, RowLines lines, int join) {
         List<String> notes = new ArrayList<>();
         int n = t.length;
         if (n < 2) {
@@ -39,23 +47,27 @@ final class TimeAudit {
         int positive = 0;
         for (int i = 1; i < n; i++) {
             double s = t[i] - t[i - 1];
-            if (s > 0) {
+            if (s > 0 && i != join) {
                 steps[positive++] = s;
             }
         }
         if (positive == 0) {
             notes.add("no time step is positive: the sample rate cannot be inferred (1 Hz shown)");
-            return new Result(1, Double.NaN, issues(t, lines, Double.POSITIVE_INFINITY, notes), notes);
+            return new Result(1, Double.NaN, issues(t, lines, Double.POSITIVE_INFINITY, join, notes), notes);
         }
         double median = median(steps, positive);
-        List<TimeIssue> issues = issues(t, lines, GAP_FACTOR * median, notes);
+        List<TimeIssue> issues = issues(t, lines, GAP_FACTOR * median, join, notes);
         return new Result(1 / median, median, issues, notes);
     }
 
-    private static List<TimeIssue> issues(double[] t, RowLines lines, double gapAbove, List<String> notes) {
+    private static List<TimeIssue> issues(double[] t, RowLines lines, double gapAbove, int join,
+                                          List<String> notes) {
         List<TimeIssue> out = new ArrayList<>();
         int[] count = new int[TimeIssue.Kind.values().length];
         for (int i = 1; i < t.length; i++) {
+            if (i == join) {
+                continue;
+            }
             double s = t[i] - t[i - 1];
             TimeIssue.Kind k = s < 0 ? TimeIssue.Kind.BACKWARD : s == 0 ? TimeIssue.Kind.DUPLICATE
                     : s > gapAbove ? TimeIssue.Kind.GAP : null;

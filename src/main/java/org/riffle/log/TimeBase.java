@@ -46,6 +46,14 @@ public final class TimeBase {
         return new TimeBase(origin, seconds.clone(), seconds.length, rateHz, false);
     }
 
+    /**
+     * Samples known only by their number, for rows that are not consecutive (a reduced log): {@code numbers}
+     * holds each row's number in the log, as nominal seconds at 1 Hz; flagged as indexed. Takes ownership.
+     */
+    static TimeBase adoptIndexed(double[] numbers) {
+        return new TimeBase(null, numbers, numbers.length, 1.0, true);
+    }
+
     /** As {@link #explicit} but takes ownership of the array (readers only). */
     static TimeBase adoptExplicit(double[] seconds, double rateHz, Instant origin) {
         return new TimeBase(origin, seconds, seconds.length, rateHz, false);
@@ -76,7 +84,7 @@ public final class TimeBase {
 
     /** True when rows carry their own timestamps. */
     public boolean isExplicit() {
-        return seconds != null;
+        return seconds != null && !indexed;
     }
 
     /** The absolute time of row 0's zero, when the log gave wall-clock times. */

@@ -182,6 +182,10 @@ public final class NoteWriter {
         for (String w : watch) {
             p.bullet(2, Level.WATCH.word() + ": " + w);
         }
+        for (Assessment a : all) {
+            a.recording().source().reduction().ifPresent(r -> p.para(2, Sources.fileName(a.recording().source()
+                    .file()) + ": " + r.message()));
+        }
     }
 
     private static void safety(Page p) {

@@ -55,8 +55,9 @@ final class Sources {
         p.para(2, s.file());
         digest(p, s);
         p.field(4, LABEL, "Read as", s.format() + (s.encoding().isEmpty() ? "" : ", " + s.encoding()));
-        p.field(4, LABEL, "Rows", r.rows() + " rows; " + r.channels().size() + " numeric and "
-                + r.textChannels().size() + " text channels");
+        p.field(4, LABEL, "Rows", s.reduction().map(x -> x.rows() + " rows, of which " + r.rows() + " were kept"
+                + " and analysed (reduced to fit memory: see AT A GLANCE); ").orElse(r.rows() + " rows; ")
+                + r.channels().size() + " numeric and " + r.textChannels().size() + " text channels");
         time(p, r.time());
         issues(p, r.timeIssues());
         if (!s.preamble().isEmpty()) {

@@ -64,6 +64,47 @@ public final class Sparkline {
             lo = Math.min(lo, mn);
             hi = Math.max(hi, mx);
         }
+        return draw(cellMin, cellMax, lo, hi, width, rows, unicode);
+    }
+
+    /**
+     * One row of {@code width} cells for {@code n = min.length} consecutive runs of samples known only by
+     * their range {@code [min[b], max[b]]} (the blocks of a log too large to hold): cell c covers runs
+     * [⌊c·n/w⌋, ⌊(c+1)·n/w⌋) and stands for the range of their union, exactly as {@link #render} would
+     * draw the samples themselves when each run's cell boundaries fall on run boundaries. A run with
+     * {@code NaN} bounds (no sample present) is skipped.
+     */
+    public static String renderRanges(double[] min, double[] max, int width, boolean unicode) {
+        int n = min.length;
+        if (width < 1 || max.length != n) {
+            throw new IllegalArgumentException("sparkline of " + n + " minima and " + max.length + " maxima in "
+                    + width + " cells: need width ≥ 1 and one maximum per minimum");
+        }
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
+        double[] cellMin = new double[width];
+        double[] cellMax = new double[width];
+        for (int c = 0; c < width; c++) {
+            double mn = Double.POSITIVE_INFINITY;
+            double mx = Double.NEGATIVE_INFINITY;
+            int from = (int) ((long) c * n / width);
+            int to = Math.max((int) ((long) (c + 1) * n / width), Math.min(n, from + 1));
+            for (int i = from; i < to; i++) {
+                if (Double.isFinite(min[i]) && Double.isFinite(max[i])) {
+                    mn = Math.min(mn, min[i]);
+                    mx = Math.max(mx, max[i]);
+                }
+            }
+            cellMin[c] = mn;
+            cellMax[c] = mx;
+            lo = Math.min(lo, mn);
+            hi = Math.max(hi, mx);
+        }
+        return draw(cellMin, cellMax, lo, hi, width, 1, unicode).get(0);
+    }
+
+    private static List<String> draw(double[] cellMin, double[] cellMax, double lo, double hi, int width, int rows,
+                                     boolean unicode) {
         String glyphs = unicode ? BLOCKS : ASCII_RAMP;
         int levels = 8 * rows;
         List<String> out = new ArrayList<>(rows);

@@ -65,9 +65,27 @@ final class ListView {
                     .append(TimeText.span(r.time())).append(", ").append(TimeText.rate(r.time().rateHz()))
                     .append(", ").append(r.channels().size()).append(" channels");
         }
-        c.field(0, 1, files.toString(), c.cols(), Style.BOLD);
+        String reduced = reduced(s);
+        if (reduced.isEmpty()) {
+            c.field(0, 1, files.toString(), c.cols(), Style.BOLD);
+        } else {
+            int col = c.text(0, 1, files + "  ", Style.BOLD);
+            c.field(col, 1, reduced, Math.max(0, c.cols() - col), Style.WATCH);
+        }
         c.field(0, 2, "span: " + spans, c.cols(), Style.PLAIN);
         c.field(0, 3, baselineAndAsset(s), c.cols(), Style.PLAIN);
+    }
+
+    /** One line for the logs read in reduced form (too large for memory), {@code ""} when none was. */
+    static String reduced(ScreenState s) {
+        StringBuilder b = new StringBuilder();
+        for (int i = 0; i < s.sources.size(); i++) {
+            Recording r = s.sources.get(i).recording;
+            int at = i;
+            r.source().reduction().ifPresent(x -> b.append(b.length() == 0 ? "" : "; ")
+                    .append(s.sources.size() > 1 ? (at + 1) + ": " : "").append(x.brief()));
+        }
+        return b.toString();
     }
 
     private static String baselineAndAsset(ScreenState s) {
@@ -112,7 +130,8 @@ final class ListView {
         col = c.text(col, row, s.remarks.comment(s.ref(r)).isEmpty() ? " " : "*", base);
         col = c.field(col, row, s.label(r), k.name(), base);
         col = c.text(col, row, " ", base);
-        col = c.text(col, row, s.sparks.line(r, ch, k.spark(), !c.glyphs.ascii()), base);
+        col = c.text(col, row, s.sparks.line(r, ch, src.recording.source().reduction()
+                .flatMap(x -> x.blocks(ch.name())), k.spark(), !c.glyphs.ascii()), base);
         col = c.text(col, row, " ", base);
         col = c.right(col, row, levelText(a), 8, base);
         col = c.text(col, row, " " + a.flatMap(ChannelAssessment::vibration).map(v -> v.zone()).orElse(" ")

@@ -3,6 +3,8 @@ package org.riffle.tui;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
+import org.riffle.log.BlockStats;
 import org.riffle.log.Channel;
 import org.riffle.signal.Sparkline;
 import org.riffle.signal.Summary;
@@ -23,10 +25,14 @@ final class SparkCache {
     private String traceKey = "";
     private Trace trace;
 
-    /** The one-row sparkline of {@code ch} (the channel of {@code row}) over the whole log. */
-    String line(ScreenState.Row row, Channel ch, int width, boolean unicode) {
+    /**
+     * The one-row sparkline of {@code ch} (the channel of {@code row}) over the whole log: from the block
+     * statistics of a reduced log when {@code blocks} is present, else from the samples.
+     */
+    String line(ScreenState.Row row, Channel ch, Optional<BlockStats> blocks, int width, boolean unicode) {
         String key = row.source() + ":" + row.channel() + ":" + width + ":" + unicode;
-        return lines.computeIfAbsent(key, k -> Sparkline.render(ch::value, ch.size(), width, 1, unicode).get(0));
+        return lines.computeIfAbsent(key, k -> blocks.map(b -> Sparkline.renderRanges(b.minima(), b.maxima(),
+                width, unicode)).orElseGet(() -> Sparkline.render(ch::value, ch.size(), width, 1, unicode).get(0)));
     }
 
     /** The trace of samples {@code [from, to)} of {@code ch} in {@code width} × {@code height} cells. */

@@ -14,6 +14,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
+import java.util.Locale;
 import java.util.concurrent.TimeUnit;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -54,7 +55,7 @@ class HostileInputTest {
         assertEquals(10L * 1024 * 1024, Files.size(f));
         Run r = channels(f);
         assertEquals(ExitCode.BAD_INPUT, r.status());
-        assertEquals("riffle: " + f + ":1: line 1 is longer than 262144 bytes: not a delimited text log"
+        assertEquals("riffle: " + f + ":1: line 1 is longer than 4194304 bytes: not a delimited text log"
                 + " (binary data, or no line breaks?)", r.err());
     }
 
@@ -78,6 +79,34 @@ class HostileInputTest {
         assertEquals(ExitCode.OK, r.status(), r.err());
         assertTrue(r.out().startsWith(f + ": 5 rows, 20000 numeric channels, 0 text channels"), r.out());
         assertTrue(r.out().contains("\nc19999 "), "the last column is listed");
+    }
+
+    /**
+     * 20,000 columns as a historian exports them: tag names with units make the header 620 KB and each
+     * row of six-decimal values 240 KB, both past the 256 KiB that used to be the line limit.
+     */
+    @Test
+    void twentyThousandLongNamedColumnsWithWideRowsAreRead() throws IOException {
+        Path f = dir.resolve("wide-tags.csv");
+        StringBuilder sb = new StringBuilder("time");
+        for (int c = 0; c < 20_000; c++) {
+            sb.append(String.format(Locale.ROOT, ",AREA7_PUMPSTATION_TAG%05d [m3/h]", c));
+        }
+        int header = sb.length();
+        sb.append('\n');
+        for (int r = 0; r < 4; r++) {
+            sb.append("2026-03-01T08:00:0").append(r).append('Z');
+            for (int c = 0; c < 20_000; c++) {
+                sb.append(String.format(Locale.ROOT, ",%.6f", r + c / 1e4));
+            }
+            sb.append('\n');
+        }
+        Files.writeString(f, sb, StandardCharsets.US_ASCII);
+        assertTrue(header > 600_000, "header of " + header + " bytes");
+        Run r = channels(f);
+        assertEquals(ExitCode.OK, r.status(), r.err());
+        assertTrue(r.out().startsWith(f + ": 4 rows, 20000 numeric channels, 0 text channels"), r.out());
+        assertTrue(r.out().contains("\nAREA7_PUMPSTATION_TAG19999  m3/h "), "the last column, its unit split off");
     }
 
     @Test

@@ -27,6 +27,17 @@ class MainTest {
         assertTrue(r.out().matches("riffle \\d+\\.\\d+\\.\\d+\\R"), r.out());
     }
 
+    /** A worker's OutOfMemoryError arrives wrapped (the triage pool's IllegalStateException): still the memory line. */
+    @Test
+    void aWrappedOutOfMemoryErrorIsTheMemoryLineNotAnInternalError() {
+        assertTrue(Main.outOfMemory(new IllegalStateException("triage failed on a channel",
+                new java.util.concurrent.ExecutionException(new OutOfMemoryError("Java heap space")))));
+        assertFalse(Main.outOfMemory(new IllegalStateException("a bug", new ArithmeticException())));
+        assertTrue(Main.outOfMemory().matches("riffle: not enough memory: the Java heap limit is \\d+ MiB; raise it,"
+                + " e\\.g\\. java -Xmx4g -jar riffle\\.jar \\.\\.\\., or split the log into shorter files"),
+                Main.outOfMemory());
+    }
+
     @Test
     void missingFileIsOneLineWithTheFileNameAndStatus3() {
         Run r = run("channels", "no-such-file.csv");

@@ -52,7 +52,33 @@ class FastPathTest {
                 () -> LogReader.readAllGeneral(f, ReadOptions.defaults()));
         assertEquals(f + ":3:23: more fields than the 2 columns of the header; check the delimiter (--delimiter)"
                 + " or quote fields that hold it", fast.getMessage());
-        assertEquals(f + ":3: more fields than the 2 columns of the header; check the delimiter (--delimiter)"
-                + " or quote fields that hold it", general.getMessage(), "the general path knows no column");
+        assertEquals(fast.getMessage(), general.getMessage(), "the general path names the column too");
+    }
+
+    /** Columns count characters from 1 on the line where the extra field begins, quoted line breaks and all. */
+    @Test
+    void theGeneralPathNamesTheLineAndColumnOfAnExtraField(@TempDir Path dir) throws IOException {
+        Path f = dir.resolve("quoted.csv");
+        Files.writeString(f, "time,a,note\n2026-03-01 08:00:00,1,\"ok\"\n2026-03-01 08:00:01,2,\"two\nlines\",9\n");
+        LogException e = assertThrows(LogException.class, () -> LogReader.read(f, ReadOptions.defaults()));
+        assertEquals(f + ":4:8: more fields than the 3 columns of the header; check the delimiter (--delimiter)"
+                + " or quote fields that hold it", e.getMessage(), "'9' after 'lines\",' on line 4");
+        Path s = dir.resolve("semi.csv");
+        Files.writeString(s, "time;a\n2026-03-01 08:00:00;1\n2026-03-01 08:00:01;2\n2026-03-01 08:00:02;\"1;5\";\"x\"\n");
+        LogException e2 = assertThrows(LogException.class, () -> LogReader.read(s, ReadOptions.defaults()
+                .withDelimiter(';')));
+        assertEquals(s + ":4:27: more fields than the 2 columns of the header; check the delimiter (--delimiter)"
+                + " or quote fields that hold it", e2.getMessage(), "the quoted ';' is no delimiter");
+    }
+
+    @Test
+    void fieldStartsAreFoundAsTheSplitterCountsFields() {
+        assertEquals(0, Splitter.fieldStart("a,b,c", ',', 0));
+        assertEquals(4, Splitter.fieldStart("a,b,c", ',', 2));
+        assertEquals(8, Splitter.fieldStart("\"a,\"\"b\",c", ',', 1), "a doubled quote stays inside");
+        assertEquals(-1, Splitter.fieldStart("a,b", ',', 2));
+        assertEquals(6, Splitter.fieldStart("  1   2  3", Dialect.WHITESPACE, 1));
+        assertEquals(2, Splitter.fieldStart("  \"x y\" 2", Dialect.WHITESPACE, 0));
+        assertEquals(8, Splitter.fieldStart("  \"x y\" 2", Dialect.WHITESPACE, 1));
     }
 }
