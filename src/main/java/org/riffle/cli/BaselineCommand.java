@@ -8,7 +8,6 @@ import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.riffle.log.LogException;
 import org.riffle.log.LogReader;
-import org.riffle.log.ReadOptions;
 import org.riffle.log.Recording;
 import org.riffle.note.BaselineStore;
 import org.riffle.note.NoteException;
@@ -18,6 +17,7 @@ import org.riffle.triage.Baseline;
 import org.riffle.triage.BaselineModel;
 import org.riffle.triage.TriageParams;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.ParameterException;
@@ -67,9 +67,10 @@ final class BaselineCommand implements Callable<Integer> {
              @Option(names = "--span", paramLabel = "A:B", description = "Learn from rows A (inclusive) to B "
                      + "(exclusive) only; default: the whole log.") String span,
              @Option(names = "--store", paramLabel = "DIR", description = "The baseline folder (default: "
-                     + "$RIFFLE_BASELINE_DIR, else $XDG_DATA_HOME/riffle/baselines).") Path store)
+                     + "$RIFFLE_BASELINE_DIR, else $XDG_DATA_HOME/riffle/baselines).") Path store,
+             @Mixin ReadOptionsMixin read)
             throws LogException {
-        Recording rec = LogReader.read(log, ReadOptions.defaults());
+        Recording rec = LogReader.read(log, read.toReadOptions());
         Reading.announce(rec, spec.commandLine().getErr());
         Baseline b;
         if (span == null) {

@@ -16,8 +16,6 @@ import java.util.concurrent.atomic.AtomicInteger;
 import java.util.regex.Pattern;
 import java.util.stream.Stream;
 import org.riffle.log.LogException;
-import org.riffle.log.LogReader;
-import org.riffle.log.ReadOptions;
 import org.riffle.note.Findings;
 import org.riffle.note.MetricsCsv;
 import org.riffle.note.NoteException;
@@ -107,7 +105,7 @@ final class ReportBatch {
     private Outcome one(Path log, Path outDir, ReportCommand.Judging judging, NoteWriter writer, Findings findings) {
         Path asked = outDir.resolve(NoteSaver.defaultName(log.toString()));
         try {
-            Assessment a = judging.assess(LogReader.read(log, ReadOptions.defaults()));
+            Assessment a = judging.assess(judging.read(log));
             String note = writer.render(a, findings);
             return new Outcome(log, MetricsCsv.rows(a), asked, NoteSaver.save(asked, note), "", false);
         } catch (LogException e) {

@@ -101,6 +101,9 @@ final class ReportCommand implements Callable<Integer> {
     @Mixin
     private VibrationOptions vibration;
 
+    @Mixin
+    private ReadOptionsMixin read;
+
     @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: one per core).")
     private int threads = Runtime.getRuntime().availableProcessors();
 
@@ -126,7 +129,8 @@ final class ReportCommand implements Callable<Integer> {
         if (folders > 0 && folders < logs.size()) {
             throw new ParameterException(spec.commandLine(), "give either log files or folders of logs, not both");
         }
-        Judging judging = new Judging(params, null, null);
+        ReadOptions readOptions = read.toReadOptions();
+        Judging judging = new Judging(params, null, null, readOptions);
         if (storedBaseline != null) {
             if (asset.isBlank()) {
                 throw new ParameterException(spec.commandLine(), "--stored-baseline needs --asset ID");
@@ -135,7 +139,7 @@ final class ReportCommand implements Callable<Integer> {
             try {
                 StoredBaseline b = s.find(asset, storedBaseline.isEmpty() ? Optional.empty()
                         : Optional.of(storedBaseline));
-                judging = new Judging(params, s, b);
+                judging = new Judging(params, s, b, readOptions);
                 writer = writer.withStoredBaseline(b);
             } catch (NoteException e) {
                 spec.commandLine().getErr().println("riffle: " + e.getMessage());
@@ -150,13 +154,19 @@ final class ReportCommand implements Callable<Integer> {
     }
 
     /**
-     * How each log is judged: against rows of itself ({@code stored} null), or against a stored
-     * baseline, which is checked against every log before use. Immutable.
+     * How each log is read ({@code read}, the read options) and judged: against rows of itself
+     * ({@code stored} null), or against a stored baseline, which is checked against every log before
+     * use. Immutable.
      */
-    record Judging(TriageParams params, BaselineStore store, StoredBaseline stored) {
+    record Judging(TriageParams params, BaselineStore store, StoredBaseline stored, ReadOptions read) {
         /** The same judging on {@code n} threads. */
         Judging threads(int n) {
-            return new Judging(params.withThreads(n), store, stored);
+            return new Judging(params.withThreads(n), store, stored, read);
+        }
+
+        /** Reads {@code log} with the read options. */
+        Recording read(Path log) throws LogException {
+            return LogReader.read(log, read);
         }
 
         Assessment assess(Recording rec) throws LogException {
@@ -176,7 +186,7 @@ final class ReportCommand implements Callable<Integer> {
     private int single(Judging judging, NoteWriter writer, Findings findings) throws LogException {
         List<Assessment> all = new ArrayList<>();
         for (Path log : logs) {
-            Recording rec = LogReader.read(log, ReadOptions.defaults());
+            Recording rec = judging.read(log);
             Reading.announce(rec, spec.commandLine().getErr());
             all.add(judging.assess(rec));
         }

@@ -1,5 +1,6 @@
 package org.riffle.cli;
 
+import org.riffle.log.ReadOptions;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -22,6 +23,28 @@ class ReportCommandTest {
 
     @TempDir
     Path dir;
+
+    /**
+     * The read options reach the report: a log whose dates can be read day first or month first is
+     * refused with the option that settles it, and reported when the option is given.
+     */
+    @Test
+    void theReadOptionsSettleAnAmbiguousLogForTheReport() throws Exception {
+        Path log = dir.resolve("ambiguous.csv");
+        StringBuilder sb = new StringBuilder("time,flow [m3/s]\n");
+        for (int i = 0; i < 2000; i++) {
+            sb.append(String.format(java.util.Locale.ROOT, "03/04/2026 %02d:%02d:%02d,%.2f%n", i / 3600,
+                    i / 60 % 60, i % 60, 30 + Math.sin(0.1 * i)));
+        }
+        java.nio.file.Files.writeString(log, sb.toString());
+        Path note = dir.resolve("ambiguous-note.txt");
+        MainTest.Run refused = MainTest.run("report", log.toString(), "-o", note.toString());
+        assertEquals(ExitCode.BAD_INPUT, refused.status(), refused.err());
+        assertTrue(refused.err().contains("give --day-first or --month-first"), refused.err());
+        MainTest.Run done = MainTest.run("report", log.toString(), "-o", note.toString(), "--day-first");
+        assertEquals(0, done.status(), done.err());
+        assertTrue(java.nio.file.Files.readString(note).contains("2026-04-03"), "read as 3 April");
+    }
 
     @Test
     void aNoteIsWrittenWithWhatWasGivenAndWhereItWentIsPrinted() throws Exception {
@@ -109,7 +132,8 @@ class ReportCommandTest {
             StringWriter err = new StringWriter();
             Path o = Files.createDirectory(dir.resolve("o" + terminal));
             int status = new ReportBatch(new PrintWriter(out), new PrintWriter(err), terminal).run(List.of(logs), o,
-                    null, new ReportCommand.Judging(new TriageParams(-1, -1, 2), null, null), NoteWriter.standard(),
+                    null, new ReportCommand.Judging(new TriageParams(-1, -1, 2), null, null,
+                            ReadOptions.defaults()), NoteWriter.standard(),
                     Findings.EMPTY);
             assertEquals(0, status, err.toString());
             assertEquals(terminal, err.toString().contains("\rriffle report: 2 of 2 logs done"), err.toString());
