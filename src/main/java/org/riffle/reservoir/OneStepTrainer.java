@@ -49,6 +49,8 @@ public final class OneStepTrainer {
         int usable = countPresent(y);
         double[] su = usable > space.searchRows() ? excerpt(u, space) : u;
         double[] sy = su == u ? y : Harvest.nextValues(su);
+        // the stretches carry a washout's worth of spare steps each: keep about searchRows rows of them
+        int stride = Math.max(1, countPresent(sy) / space.searchRows());
         int total = space.radii().length * space.leaks().length + 2;
         int done = 0;
         for (double rho : space.radii()) {
@@ -60,7 +62,7 @@ public final class OneStepTrainer {
                         tried.add(new OneStepFit.Candidate(rho, alpha, lambda, -1, Double.NaN));
                     }
                 } else {
-                    Folds folds = Folds.harvest(r, su, sy, washout, space.folds(), 1);
+                    Folds folds = Folds.harvest(r, su, sy, washout, space.folds(), stride);
                     for (double lambda : space.ridges()) {
                         double mse = validationMse(folds, lambda);
                         double nrmse = Math.sqrt(mse / folds.targetVariance());

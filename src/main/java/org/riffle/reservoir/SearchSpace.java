@@ -7,7 +7,9 @@ import java.util.Arrays;
  * penalties, judged on {@code folds} contiguous time blocks of the baseline (each block validated by a
  * readout fitted on the others, with a washout-long gap after the block left out of training).
  * A series longer than {@code searchRows} usable steps is searched on {@code folds} stretches spread
- * evenly over it, of searchRows / folds steps each plus the longest washout; the final readout is
+ * evenly over it, of searchRows / folds steps each plus the longest washout, and on every k-th of
+ * their rows so that about {@code searchRows} are used (as a series of up to twice that length is); the
+ * final readout is
  * fitted on every step, or every k-th of a baseline longer than {@link OneStepTrainer#FIT_ROWS} steps,
  * and the held-out errors are computed on every step.
  *
