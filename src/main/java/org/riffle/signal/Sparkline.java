@@ -43,28 +43,7 @@ public final class Sparkline {
             throw new IllegalArgumentException("sparkline of " + n + " samples in " + width + " cells × "
                     + rows + " rows: need width ≥ 1, rows ≥ 1, samples ≥ 0");
         }
-        double lo = Double.POSITIVE_INFINITY;
-        double hi = Double.NEGATIVE_INFINITY;
-        double[] cellMin = new double[width];
-        double[] cellMax = new double[width];
-        for (int c = 0; c < width; c++) {
-            double mn = Double.POSITIVE_INFINITY;
-            double mx = Double.NEGATIVE_INFINITY;
-            int from = (int) ((long) c * n / width);
-            int to = Math.max((int) ((long) (c + 1) * n / width), Math.min(n, from + 1));
-            for (int i = from; i < to; i++) {
-                double v = sample.applyAsDouble(i);
-                if (Double.isFinite(v)) {
-                    mn = Math.min(mn, v);
-                    mx = Math.max(mx, v);
-                }
-            }
-            cellMin[c] = mn;
-            cellMax[c] = mx;
-            lo = Math.min(lo, mn);
-            hi = Math.max(hi, mx);
-        }
-        return draw(cellMin, cellMax, lo, hi, width, rows, unicode);
+        return ranges(sample, sample, n, width, rows, unicode);
     }
 
     /**
@@ -80,6 +59,17 @@ public final class Sparkline {
             throw new IllegalArgumentException("sparkline of " + n + " minima and " + max.length + " maxima in "
                     + width + " cells: need width ≥ 1 and one maximum per minimum");
         }
+        return ranges(i -> min[i], i -> max[i], n, width, 1, unicode).get(0);
+    }
+
+    /**
+     * {@code rows} rows of {@code width} cells for {@code n} consecutive runs of samples known by their
+     * ranges [low(i), high(i)] (a single sample is a run whose range is itself): cell c stands for runs
+     * [⌊c·n/w⌋, ⌊(c+1)·n/w⌋), at least one, and the range of their union; a run with a bound that is
+     * not finite is skipped.
+     */
+    private static List<String> ranges(IntToDoubleFunction low, IntToDoubleFunction high, int n, int width,
+                                       int rows, boolean unicode) {
         double lo = Double.POSITIVE_INFINITY;
         double hi = Double.NEGATIVE_INFINITY;
         double[] cellMin = new double[width];
@@ -90,9 +80,11 @@ public final class Sparkline {
             int from = (int) ((long) c * n / width);
             int to = Math.max((int) ((long) (c + 1) * n / width), Math.min(n, from + 1));
             for (int i = from; i < to; i++) {
-                if (Double.isFinite(min[i]) && Double.isFinite(max[i])) {
-                    mn = Math.min(mn, min[i]);
-                    mx = Math.max(mx, max[i]);
+                double a = low.applyAsDouble(i);
+                double b = high.applyAsDouble(i);
+                if (Double.isFinite(a) && Double.isFinite(b)) {
+                    mn = Math.min(mn, a);
+                    mx = Math.max(mx, b);
                 }
             }
             cellMin[c] = mn;
@@ -100,7 +92,7 @@ public final class Sparkline {
             lo = Math.min(lo, mn);
             hi = Math.max(hi, mx);
         }
-        return draw(cellMin, cellMax, lo, hi, width, 1, unicode).get(0);
+        return draw(cellMin, cellMax, lo, hi, width, rows, unicode);
     }
 
     private static List<String> draw(double[] cellMin, double[] cellMax, double lo, double hi, int width, int rows,
