@@ -7,6 +7,7 @@ import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 
 /**
  * Reads a WAV recording (RIFF, little-endian; Microsoft "Multimedia Programming Interface and Data
@@ -113,6 +114,14 @@ final class WavReader {
         } else {
             cap = Math.min(declared, src.sizeBytes / f.blockAlign());
         }
+        long budget = MemoryBudget.of(opt);
+        int blockCap = Blocks.capacityFor(budget, f.channels());
+        long blockBytes = (long) blockCap * f.channels() * Blocks.BYTES_PER_BLOCK;
+        int rowCap = MemoryBudget.rowCap(budget, blockBytes, f.channels(), Integer.MAX_VALUE - 16);
+        if (src.sizeBytes >= 0 && !src.gzipped && cap > rowCap) {
+            int keep = MemoryBudget.keepCap(budget, blockBytes, f.channels(), rowCap);
+            return reduced(src, in, f, cap, opt, new Plan(budget, blockCap, keep));
+        }
         if (cap > Integer.MAX_VALUE - 16) {
             throw in.bad("more than " + (Integer.MAX_VALUE - 16) + " frames: too long for riffle");
         }
@@ -136,6 +145,65 @@ final class WavReader {
                 "", List.of(), warnings);
         return new Recording(facts, TimeBase.regular((int) frames, f.rate(), null), channels, List.of(),
                 List.of());
+    }
+
+    /** How a recording too large for memory is read: the budget, the blocks per channel, the frames kept. */
+    private record Plan(long budget, int blockCap, int keep) {
+    }
+
+    /**
+     * A recording whose frames do not fit the memory riffle may use, read in one pass into the reduced
+     * form of {@link Reduction}: the first and the last frames at full resolution (the number known from
+     * the file's size), block statistics of every frame. Only a file of known size is read this way; gzip
+     * and standard input are read whole.
+     */
+    private static Recording reduced(Source src, Riff in, Format f, long total, ReadOptions opt, Plan plan)
+            throws IOException, LogException {
+        int head = plan.keep() / 2;
+        int tail = plan.keep() - head;
+        long tailFrom = total - tail;
+        int[] columns = new int[f.channels()];
+        for (int c = 0; c < columns.length; c++) {
+            columns[c] = c;
+        }
+        Blocks blocks = new Blocks(columns, plan.blockCap());
+        float[][] kept = new float[f.channels()][plan.keep()];
+        double scale = opt.sensitivity().orElse(1);
+        long frames = new WavSamples(f, 0).stream(in.stream(), total, (values, count, first) -> {
+            for (int i = 0; i < count; i++) {
+                long r = first + i;
+                int at = r < head ? (int) r : r >= tailFrom ? head + (int) (r - tailFrom) : -1;
+                for (int c = 0; c < values.length; c++) {
+                    if (scale != 1) {
+                        values[c][i] = (float) (values[c][i] * scale);
+                    }
+                    if (at >= 0) {
+                        kept[c][at] = values[c][i];
+                    }
+                }
+                blocks.add(values, i);
+            }
+        });
+        if (frames < total) {
+            throw in.bad("the data chunk ends after " + frames + " of the " + total + " frames the file's size"
+                    + " promises");
+        }
+        String unit = opt.sensitivityUnit().orElse(FULL_SCALE);
+        List<Channel> channels = new ArrayList<>();
+        List<BlockStats> stats = new ArrayList<>();
+        for (int c = 0; c < f.channels(); c++) {
+            channels.add(Channel.adopt("ch" + (c + 1), unit, kept[c]));
+            stats.add(blocks.snapshot(c, "ch" + (c + 1)));
+        }
+        double[] at = new double[plan.keep()];
+        for (int i = 0; i < at.length; i++) {
+            at[i] = (i < head ? i : tailFrom + (i - head)) / (double) f.rate();
+        }
+        Reduction reduction = new Reduction(total, total * 4L * f.channels(), plan.budget(),
+                MemoryBudget.wholeHeap(total, f.channels()), MemoryBudget.heap(), head, tailFrom, stats);
+        SourceFacts facts = new SourceFacts(src.name, src.sizeBytes, f.describe(), "", List.of(), List.of(),
+                Optional.empty(), Optional.of(reduction));
+        return new Recording(facts, TimeBase.adoptExplicit(at, f.rate(), null), channels, List.of(), List.of());
     }
 
     /** A cursor over the RIFF stream that reports broken headers by file. */

@@ -22,44 +22,65 @@ final class WavSamples {
         this.data = new float[f.channels()][Math.max(16, capacity)];
     }
 
+    /** Frames decoded a chunk at a time: {@code values[channel][0, count)} are frames {@code first} onwards. */
+    interface Chunks {
+        void take(float[][] values, int count, long first);
+    }
+
     /** Reads up to {@code max} frames (to the end of the stream at most); returns the number read. */
     long readFrom(InputStream in, long max) throws IOException {
+        return stream(in, max, (values, count, first) -> {
+            if (frames + count > data[0].length) {
+                int grown = (int) Math.min(Integer.MAX_VALUE - 16, Math.max(frames + (long) count,
+                        data[0].length * 3L / 2));
+                for (int c = 0; c < data.length; c++) {
+                    data[c] = Arrays.copyOf(data[c], grown);
+                }
+            }
+            for (int c = 0; c < data.length; c++) {
+                System.arraycopy(values[c], 0, data[c], frames, count);
+            }
+            frames += count;
+        });
+    }
+
+    /**
+     * Reads up to {@code max} frames (to the end of the stream at most) without keeping them: each chunk
+     * goes to {@code sink}, decoded as fractions of full scale. Returns the number read.
+     */
+    long stream(InputStream in, long max, Chunks sink) throws IOException {
         int align = f.blockAlign();
         byte[] buf = new byte[Math.max(align, BLOCK / align * align)];
+        float[][] chunk = new float[f.channels()][buf.length / align];
+        long read = 0;
         int have = 0;
-        while (frames < max) {
+        while (read < max) {
             int n = in.read(buf, have, buf.length - have);
             if (n < 0) {
                 break;
             }
             have += n;
-            int whole = have / align;
-            whole = (int) Math.min(whole, max - frames);
-            decode(buf, whole);
+            int whole = (int) Math.min(have / align, max - read);
+            decode(buf, whole, chunk);
+            sink.take(chunk, whole, read);
+            read += whole;
             int used = whole * align;
             System.arraycopy(buf, used, buf, 0, have - used);
             have -= used;
         }
-        return frames;
+        return read;
     }
 
-    private void decode(byte[] b, int count) {
-        if (frames + count > data[0].length) {
-            int grown = (int) Math.min(Integer.MAX_VALUE - 16, Math.max(frames + (long) count, data[0].length * 3L / 2));
-            for (int c = 0; c < data.length; c++) {
-                data[c] = Arrays.copyOf(data[c], grown);
-            }
-        }
+    private void decode(byte[] b, int count, float[][] out) {
         int bytes = f.bits() / 8;
         boolean flt = f.tag() == 3;
         int p = 0;
         for (int i = 0; i < count; i++) {
-            for (int c = 0; c < data.length; c++) {
-                data[c][frames + i] = sample(b, p, bytes, flt);
+            for (int c = 0; c < out.length; c++) {
+                out[c][i] = sample(b, p, bytes, flt);
                 p += bytes;
             }
         }
-        frames += count;
     }
 
     private static float sample(byte[] b, int p, int bytes, boolean flt) {

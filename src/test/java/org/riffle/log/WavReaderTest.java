@@ -131,4 +131,72 @@ class WavReaderTest {
         assertEquals(avi + ": WAV: a RIFF file of type 'AVI ', not WAVE audio", assertThrows(LogException.class,
                 () -> LogReader.read(avi, ReadOptions.defaults())).getMessage());
     }
+
+    /**
+     * A recording too large for the memory budget is read in one pass into the reduced form: the first
+     * and last frames exactly as a whole read gives them (sensitivity applied), at their own times, and
+     * block statistics whose minimum, maximum, mean and count over all blocks are those of every frame
+     * (computed here directly from the whole read).
+     */
+    @Test
+    void aRecordingTooLargeForMemoryIsReadReduced(@TempDir Path dir) throws IOException, LogException {
+        long[][] frames = new long[20_000][2];
+        for (int i = 0; i < frames.length; i++) {
+            frames[i][0] = Math.round(8000 * Math.sin(0.01 * i));
+            frames[i][1] = i == 9_999 ? 32_000 : (i * 7L * 97) % 20_000 - 10_000;
+        }
+        Path f = dir.resolve("long.wav");
+        Files.write(f, WavWriter.wav(1, 16, 5120, false, false, frames));
+        ReadOptions opt = ReadOptions.defaults().withSensitivity(50, "m/s²");
+        Recording whole = LogReader.read(f, opt);
+        Recording red = LogReader.read(f, opt.withMemoryBytes(200_000));
+        assertEquals(true, whole.source().reduction().isEmpty());
+        Reduction r = red.source().reduction().orElseThrow();
+        assertEquals(20_000, r.rows());
+        assertEquals(r.keptRows(), red.rows());
+        assertEquals(true, r.keptRows() < 2_000 && r.keptRows() >= 64, r.keptRows() + " kept");
+        for (int c = 0; c < 2; c++) {
+            Channel w = whole.channels().get(c);
+            Channel k = red.channels().get(c);
+            assertEquals("m/s²", k.unit());
+            for (int i = 0; i < red.rows(); i++) {
+                int row = (int) r.logRow(i);
+                assertEquals(w.value(row), k.value(i), "channel " + c + " kept row " + i);
+                assertEquals(row / 5120.0, red.time().seconds(i), 1e-12, "time of kept row " + i);
+            }
+            BlockStats b = r.blocks("ch" + (c + 1)).orElseThrow();
+            double min = Double.POSITIVE_INFINITY;
+            double max = Double.NEGATIVE_INFINITY;
+            double sum = 0;
+            for (float v : w.values()) {
+                min = Math.min(min, v);
+                max = Math.max(max, v);
+                sum += v;
+            }
+            double bMin = Double.POSITIVE_INFINITY;
+            double bMax = Double.NEGATIVE_INFINITY;
+            double bSum = 0;
+            long n = 0;
+            for (int k2 = 0; k2 < b.blocks(); k2++) {
+                bMin = Math.min(bMin, b.min(k2));
+                bMax = Math.max(bMax, b.max(k2));
+                bSum += b.mean(k2) * b.count(k2);
+                n += b.count(k2);
+            }
+            assertEquals(20_000, n);
+            assertEquals(min, bMin, 0);
+            assertEquals(max, bMax, 0);
+            assertEquals(sum / 20_000, bSum / n, 1e-9);
+        }
+        assertEquals(50.0 * 32_000 / 32_768, maxOf(r.blocks("ch2").orElseThrow()), 1e-3,
+                "the spike at frame 9999, between the kept windows, is in the overview");
+    }
+
+    private static double maxOf(BlockStats b) {
+        double m = Double.NEGATIVE_INFINITY;
+        for (int k = 0; k < b.blocks(); k++) {
+            m = Math.max(m, b.max(k));
+        }
+        return m;
+    }
 }
