@@ -104,4 +104,38 @@ class BigLogIT {
         assertTrue(note.contains("long-run.csv.gz: REDUCED to fit memory: the 2,000,000 rows"), note);
         assertTrue(note.contains("2000000 rows, of which "), note);
     }
+
+    /**
+     * A WAV whose samples need more than the heap (10,000,000 frames of 2 channels: 76 MiB as floats,
+     * 38 MiB on disk), one spike in the middle: read reduced, not refused.
+     */
+    @Test
+    void aRecordingLargerThanTheHeapIsReadReduced(@TempDir Path dir) throws Exception {
+        int frames = 10_000_000;
+        Path wav = dir.resolve("long-run.wav");
+        try (OutputStream os = new java.io.BufferedOutputStream(Files.newOutputStream(wav), 1 << 16)) {
+            java.nio.ByteBuffer h = java.nio.ByteBuffer.allocate(44).order(java.nio.ByteOrder.LITTLE_ENDIAN);
+            h.put("RIFF".getBytes(StandardCharsets.US_ASCII)).putInt(36 + frames * 4)
+                    .put("WAVEfmt ".getBytes(StandardCharsets.US_ASCII)).putInt(16).putShort((short) 1)
+                    .putShort((short) 2).putInt(5120).putInt(5120 * 4).putShort((short) 4).putShort((short) 16)
+                    .put("data".getBytes(StandardCharsets.US_ASCII)).putInt(frames * 4);
+            os.write(h.array());
+            byte[] frame = new byte[4];
+            for (int i = 0; i < frames; i++) {
+                int v = i == frames / 2 ? 30_000 : (i * 37) % 2000 - 1000;
+                frame[0] = (byte) v;
+                frame[1] = (byte) (v >> 8);
+                frame[2] = (byte) v;
+                frame[3] = (byte) (v >> 8);
+                os.write(frame);
+            }
+        }
+        Run r = riffle(dir, "channels", "--ascii", wav.toString());
+        assertEquals(0, r.status(), r.err());
+        List<String> lines = r.out().lines().toList();
+        assertTrue(lines.get(1).startsWith("REDUCED to fit memory: the 10,000,000 rows"), lines.get(1));
+        String[] ch1 = lines.stream().filter(l -> l.startsWith("ch1 ")).findFirst().orElseThrow().split("\\s+");
+        assertEquals("10000000", ch1[2], "frames of the whole recording");
+        assertEquals(30_000 / 32_768.0, Double.parseDouble(ch1[8]), 1e-3, "the spike is the whole-file maximum");
+    }
 }
