@@ -108,7 +108,13 @@ public final class DraftStore {
     public Optional<Draft> load(Path log) throws NoteException {
         Draft best = null;
         for (Path p : new Path[] {besideLog(log), inState(log)}) {
-            if (p == null || !Files.exists(p, LinkOption.NOFOLLOW_LINKS)) {
+            if (p == null) {
+                continue;
+            }
+            // a draft save killed mid-way leaves a hidden temporary file; once an hour old it is no save
+            // under way, so opening the log clears it (autosave itself runs too often to look every time)
+            AtomicFiles.sweep(p.getParent(), SUFFIX, Duration.ofHours(1));
+            if (!Files.exists(p, LinkOption.NOFOLLOW_LINKS)) {
                 continue;
             }
             Draft d = read(p);

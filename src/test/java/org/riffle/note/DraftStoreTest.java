@@ -109,6 +109,23 @@ class DraftStoreTest {
     }
 
     @Test
+    void openingALogClearsTheTemporaryFileAKilledDraftSaveLeftAnHourAgoAndNothingElse() throws Exception {
+        store.save(log, Findings.EMPTY.withGeneral("kept"));
+        Path stale = Files.writeString(dir.resolve("..p3 log.csv.riffle-draft.0123456789ab.tmp"), "half");
+        Path fresh = Files.writeString(dir.resolve("..p3 log.csv.riffle-draft.abcdef012345.tmp"), "under way");
+        Path other = Files.writeString(dir.resolve(".notes.riffle-draft.old.tmp"), "not riffle's name");
+        java.nio.file.attribute.FileTime twoHoursAgo = java.nio.file.attribute.FileTime.from(
+                Instant.now().minusSeconds(7200));
+        for (Path p : java.util.List.of(stale, other)) {
+            Files.setLastModifiedTime(p, twoHoursAgo);
+        }
+        assertEquals("kept", store.load(log).orElseThrow().findings().general());
+        assertFalse(Files.exists(stale), "a killed save's leftover from two hours ago is removed");
+        assertTrue(Files.exists(fresh), "a temporary file seconds old may be a save under way: kept");
+        assertTrue(Files.exists(other), "a name riffle does not make is not riffle's to remove");
+    }
+
+    @Test
     void aLinkPlantedAtTheDraftPathIsReplacedNotFollowedAndRefusedOnLoad() throws Exception {
         Path victim = Files.writeString(dir.resolve("victim.txt"), "precious\n");
         Path draft = store.besideLog(log);
