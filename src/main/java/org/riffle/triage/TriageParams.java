@@ -12,7 +12,7 @@ import org.riffle.signal.VibrationParams;
  * @param baselineTo end of the baseline rows (exclusive), or -1 for the default
  * @param threads worker threads, at least 1 (results do not depend on it)
  * @param window trend window in samples (at least 2), 0 for automatic (baseline rows / 16, clamped to
- *     100..1000)
+ *     100..500)
  * @param step trend step in samples, 0 for automatic: half the window, or the whole window when half
  *     steps would give the log more than {@link #HALF_STEP_WINDOWS} windows
  * @param reservoir reservoir settings; with {@code search} its radius, leak and ridge are only the start
