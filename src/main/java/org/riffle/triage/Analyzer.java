@@ -60,11 +60,12 @@ public final class Analyzer {
         boolean[] resets = resets(recording);
         List<ChannelAssessment> out = run(recording.channels().size(), i -> {
             Channel c = recording.channels().get(i);
-            Summary stats = started(i, c, listener);
-            ChannelWork.Learning m = ChannelWork.learn(c, baseline.fromRow(), baseline.toRow(), resets,
+            double[] x = c.toDoubles();
+            Summary stats = started(i, c, x, listener);
+            ChannelWork.Learning m = ChannelWork.learn(c, x, baseline.fromRow(), baseline.toRow(), resets,
                     recording.time().rateHz(), params, shell.window(), shell.step(),
                     f -> listener.progress(i, "reservoir", 0.05 + 0.8 * f));
-            return finish(i, c, m.model(), shell, baseline, recording, resets, stats, listener, m.rqa());
+            return finish(i, c, x, m.model(), shell, baseline, recording, resets, stats, listener, m.rqa());
         });
         return new Assessment(recording, baseline, out, sharedParams(shell));
     }
@@ -84,7 +85,7 @@ public final class Analyzer {
         List<ChannelModel> models = run(recording.channels().size(), i -> {
             Channel c = recording.channels().get(i);
             listener.progress(i, "baseline", 0);
-            ChannelModel m = ChannelWork.learn(c, baseline.fromRow(), baseline.toRow(), resets,
+            ChannelModel m = ChannelWork.learn(c, c.toDoubles(), baseline.fromRow(), baseline.toRow(), resets,
                     recording.time().rateHz(), params, shell.window(), shell.step(),
                     f -> listener.progress(i, "baseline", f)).model();
             listener.progress(i, "baseline", 1);
@@ -110,32 +111,34 @@ public final class Analyzer {
         boolean[] resets = resets(recording);
         List<ChannelAssessment> out = run(recording.channels().size(), i -> {
             Channel c = recording.channels().get(i);
-            Summary stats = started(i, c, listener);
+            double[] x = c.toDoubles();
+            Summary stats = started(i, c, x, listener);
             ChannelModel m = model.channel(c.name()).orElse(ChannelModel.none(c.name(), c.unit(),
                     "no baseline: the baseline model has no channel named '" + c.name() + "'"));
-            return finish(i, c, m, model, baseline, recording, resets, stats, listener, Optional.empty());
+            return finish(i, c, x, m, model, baseline, recording, resets, stats, listener, Optional.empty());
         });
         return new Assessment(recording, baseline, out, sharedParams(model));
     }
 
-    private Summary started(int i, Channel c, TriageListener listener) {
+    /** {@code x}: the channel's samples as doubles, made once per channel and shared by every step. */
+    private Summary started(int i, Channel c, double[] x, TriageListener listener) {
         listener.progress(i, "statistics", 0);
-        Summary stats = Summary.of(c.toDoubles());
+        Summary stats = Summary.of(x);
         listener.updated(i, new ChannelAssessment(c.name(), c.unit(), stats, Optional.empty(), List.of(),
                 List.of(), Health.none("not yet computed"), List.of(), List.of(), false));
         return stats;
     }
 
-    private ChannelAssessment finish(int i, Channel c, ChannelModel m, BaselineModel bm, Baseline baseline,
+    private ChannelAssessment finish(int i, Channel c, double[] x, ChannelModel m, BaselineModel bm, Baseline baseline,
                                      Recording recording, boolean[] resets, Summary stats,
                                      TriageListener listener, Optional<RqaStep.Known> known) {
         listener.progress(i, "judgement", 0.9);
         // vibration figures: filled by the vibration step where the channel is a vibration channel
         Optional<VibrationFigures> vibration = VibrationStep.figures(c, recording.time().rateHz(), baseline,
                 params.vibration());
-        ChannelAssessment a = ChannelWork.assess(c, m, bm, baseline, recording.time(), resets, stats, vibration,
-                known);
-        a = ThumbnailStep.attach(a, c, m, bm, baseline, recording.time());
+        ChannelAssessment a = ChannelWork.assess(c, x, m, bm, baseline, recording.time(), resets, stats,
+                vibration, known);
+        a = a.withThumbnails(ThumbnailStep.of(x, m, bm, baseline, recording.time()));
         listener.progress(i, "done", 1);
         listener.updated(i, a);
         return a;

@@ -40,11 +40,13 @@ final class ChannelWork {
     record Learning(ChannelModel model, Optional<RqaStep.Known> rqa) {
     }
 
-    /** Learns channel {@code c} from rows [from, to); {@code resets} marks rows after a time gap (or null). */
-    static Learning learn(Channel c, int from, int to, boolean[] resets, double rateHz, TriageParams p,
+    /**
+     * Learns channel {@code c} (its samples {@code x}, not modified) from rows [from, to); {@code resets}
+     * marks rows after a time gap (or null).
+     */
+    static Learning learn(Channel c, double[] x, int from, int to, boolean[] resets, double rateHz, TriageParams p,
                               int window, int step, DoubleConsumer progress) {
         int n = to - from;
-        double[] x = c.toDoubles();
         double[] base = Arrays.copyOfRange(x, from, to);
         Summary s = Summary.of(base);
         Windows w = new Windows(n, window, step, Math.floorMod(-from, step));
@@ -61,7 +63,7 @@ final class ChannelWork {
                     rqa.map(RqaStep.Learned::dimension).orElse(0), rqa.map(RqaStep.Learned::delay).orElse(0),
                     rqa.map(RqaStep.Learned::radius).orElse(Double.NaN),
                     rqa.map(RqaStep.Learned::settings).orElse(""), Optional.empty(), List.of(), Double.NaN,
-                    List.of()), rqa.map(RqaStep.Learned::known));
+                    List.of()), rqa.map(RqaStep.Learned::baseline));
         }
         List<String> notes = new ArrayList<>();
         if (rqa.isEmpty()) {
@@ -79,7 +81,7 @@ final class ChannelWork {
                 .orElse(nans(w.count()));
         for (int k = 0; k < RQA_ROW.length; k++) {
             int row = RQA_ROW[k];
-            values[1 + k] = rqa.map(r -> r.baselineValues()[row]).orElse(nans(w.count()));
+            values[1 + k] = rqa.map(r -> r.baseline().values()[row]).orElse(nans(w.count()));
         }
         values[4] = w.means(base, 0);
         values[5] = w.stds(base, 0, values[4]);
@@ -96,7 +98,7 @@ final class ChannelWork {
         return new Learning(new ChannelModel(c.name(), c.unit(), "", s.mean(), s.std(), d, rateHz / d,
                 rqa.map(RqaStep.Learned::dimension).orElse(0), rqa.map(RqaStep.Learned::delay).orElse(0),
                 rqa.map(RqaStep.Learned::radius).orElse(Double.NaN), rqa.map(RqaStep.Learned::settings).orElse(""),
-                nov.model(), Arrays.asList(models), alert, notes), rqa.map(RqaStep.Learned::known));
+                nov.model(), Arrays.asList(models), alert, notes), rqa.map(RqaStep.Learned::baseline));
     }
 
     /** Why samples summarised by {@code s} (of {@code n} rows) cannot be judged, {@code ""} when they can. */
@@ -116,15 +118,15 @@ final class ChannelWork {
     }
 
     /**
-     * Judges channel {@code c} against {@code m}; {@code resets} marks rows after a time gap (or null);
+     * Judges channel {@code c} (its samples {@code x}, not modified) against {@code m}; {@code resets} marks
+     * rows after a time gap (or null);
      * {@code known} holds trend windows already measured with m's embedding and ε (or is empty).
      */
-    static ChannelAssessment assess(Channel c, ChannelModel m, BaselineModel bm, Baseline b, TimeBase time,
-                                    boolean[] resets, Summary stats, Optional<VibrationFigures> vibration,
-                                    Optional<RqaStep.Known> known) {
+    static ChannelAssessment assess(Channel c, double[] x, ChannelModel m, BaselineModel bm, Baseline b,
+                                    TimeBase time, boolean[] resets, Summary stats,
+                                    Optional<VibrationFigures> vibration, Optional<RqaStep.Known> known) {
         List<Param> params = Reporting.channelParams(m, bm, time);
         int n = c.size();
-        double[] x = c.toDoubles();
         Windows w = new Windows(n, bm.window(), bm.step());
         double[][] rqa = m.embeddingDimension() > 0
                 ? RqaStep.trend(x, w, bm.rqa(), m.embeddingDimension(), m.embeddingDelay(), m.rqaRadius(),

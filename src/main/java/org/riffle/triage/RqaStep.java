@@ -23,14 +23,9 @@ final class RqaStep {
 
     /**
      * What the baseline gave: the resolved embedding and ε, their description, and the baseline windows'
-     * measures [measure][window]; or only a reason.
+     * measures (which {@link #trend} reuses); or only a reason.
      */
-    record Learned(int dimension, int delay, double radius, String settings, int firstWindow,
-                   double[][] baselineValues) {
-        /** The baseline windows' measures, for {@link #trend} to reuse. */
-        Known known() {
-            return new Known(firstWindow, baselineValues);
-        }
+    record Learned(int dimension, int delay, double radius, String settings, Known baseline) {
     }
 
     /** The outcome of learning: the baseline's recurrence figures, or the reason there are none. */
@@ -53,7 +48,7 @@ final class RqaStep {
             String settings = p.describe() + " → radius " + Reporting.num(t.radius()) + " (fixed on the baseline)";
             List<RqaResult> inside = t.windows().stream().filter(r -> r.from() >= from - start).toList();
             return new Outcome(Optional.of(new Learned(p.dimension(), p.delay(), t.radius(), settings,
-                    (from + step - 1) / step, values(inside, inside.size()))), "");
+                    new Known((from + step - 1) / step, values(inside, inside.size())))), "");
         } catch (IllegalArgumentException e) {
             return new Outcome(Optional.empty(), "recurrence measures: " + e.getMessage());
         }

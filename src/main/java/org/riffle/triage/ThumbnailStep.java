@@ -3,7 +3,6 @@ package org.riffle.triage;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
-import org.riffle.log.Channel;
 import org.riffle.log.TimeBase;
 import org.riffle.recurrence.RecurrencePlot;
 import org.riffle.recurrence.Rqa;
@@ -33,12 +32,6 @@ final class ThumbnailStep {
     static final int MAX_SAMPLES = 1000;
 
     private ThumbnailStep() {
-    }
-
-    /** {@code a} with the thumbnails of channel {@code c} judged against model {@code m}. */
-    static ChannelAssessment attach(ChannelAssessment a, Channel c, ChannelModel m, BaselineModel bm, Baseline b,
-                                    TimeBase time) {
-        return a.withThumbnails(of(c.toDoubles(), m, bm, b, time));
     }
 
     /** The baseline and latest thumbnails of samples {@code x}, in that order; empty without an estimate. */
