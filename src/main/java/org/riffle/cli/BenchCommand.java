@@ -35,8 +35,8 @@ final class BenchCommand implements Callable<Integer> {
     private int warmups;
 
     @Option(names = "--runs", paramLabel = "N", defaultValue = "5",
-            description = "Measured runs; the median is reported. Default: ${DEFAULT-VALUE} (at most 1 warm-up "
-                    + "and 3 runs for those in a fresh JVM).")
+            description = "Measured runs; the median is reported. Default: ${DEFAULT-VALUE} (fewer for those in a "
+                    + "fresh JVM: at most 1 warm-up and 3 to 5 runs, and one run of RQA at N = 100,000).")
     private int runs;
 
     @Option(names = "--only", paramLabel = "TEXT", defaultValue = "",
