@@ -3,7 +3,6 @@ package org.riffle.log;
 import java.util.HashSet;
 import java.util.Locale;
 import java.util.Set;
-import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
 /**
@@ -15,8 +14,6 @@ import java.util.regex.Pattern;
  * <p>Stateless and thread-safe.
  */
 final class Units {
-    private static final Pattern SQUARE = Pattern.compile("(.*?)\\s*\\[([^\\[\\]]*)\\]\\s*");
-    private static final Pattern ROUND = Pattern.compile("(.*?)\\s*\\(([^()]*)\\)\\s*");
     private static final Pattern SYMBOL = Pattern.compile(".*[/°%0-9²³µμ·*^‰Ω].*");
     private static final Set<String> WORDS = Set.of("s", "ms", "us", "min", "h", "hz", "khz", "rpm", "v", "mv", "kv",
             "a", "ma", "ka", "w", "kw", "mw", "va", "kva", "var", "bar", "mbar", "pa", "kpa", "hpa", "mpa", "psi",
@@ -33,15 +30,34 @@ final class Units {
 
     static Split split(String header) {
         String h = header.strip();
-        Matcher m = SQUARE.matcher(h);
-        if (m.matches() && !m.group(1).isBlank()) {
-            return new Split(m.group(1).strip(), m.group(2).strip());
+        Split square = bracketed(h, '[', ']');
+        if (square != null) {
+            return square;
         }
-        m = ROUND.matcher(h);
-        if (m.matches() && !m.group(1).isBlank() && looksLikeUnit(m.group(2).strip())) {
-            return new Split(m.group(1).strip(), m.group(2).strip());
+        Split round = bracketed(h, '(', ')');
+        if (round != null && looksLikeUnit(round.unit())) {
+            return round;
         }
         return new Split(h, "");
+    }
+
+    /**
+     * {@code NAME OPEN UNIT CLOSE} with the unit last, free of either bracket, and a name that is not
+     * blank; null otherwise. A scan, not a regular expression: a lazy name followed by a bracketed group
+     * backtracks in time that grows with the square of a long header cell (a fuzzed 760 KB cell took
+     * minutes).
+     */
+    private static Split bracketed(String h, char open, char close) {
+        int end = h.length() - 1;
+        if (end < 1 || h.charAt(end) != close) {
+            return null;
+        }
+        int start = h.lastIndexOf(open, end - 1);
+        if (start < 0 || h.lastIndexOf(close, end - 1) > start) {
+            return null;
+        }
+        String name = h.substring(0, start);
+        return name.isBlank() ? null : new Split(name.strip(), h.substring(start + 1, end).strip());
     }
 
     static boolean looksLikeUnit(String u) {
