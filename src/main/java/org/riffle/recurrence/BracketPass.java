@@ -9,6 +9,9 @@ import java.util.List;
  * <p>Confined to one thread; passes over tasks are joined with {@link #merge} in task order.
  */
 final class BracketPass {
+    /** Columns of one row measured at a time, so the distances are read back while in the cache. */
+    private static final int BLOCK = 1024;
+
     final long lo;
     final long hi;
     final long width;
@@ -32,19 +35,21 @@ final class BracketPass {
     }
 
     BracketPass scan(List<Piece> task, int theiler) {
-        double[] buf = new double[1024];
+        double[] buf = new double[0];
         for (Piece p : task) {
             Segment seg = p.seg();
             int n = seg.vectors();
+            if (buf.length < n) {
+                buf = new double[n];
+            }
             for (int i = p.rowFrom(); i < p.rowTo(); i++) {
                 if ((i & 31) == 0 && Thread.currentThread().isInterrupted()) {
                     throw new java.util.concurrent.CancellationException("recurrence analysis cancelled");
                 }
-                for (int j0 = i + theiler; j0 < n; j0 += buf.length) {
-                    int j1 = Math.min(n, j0 + buf.length);
+                for (int j0 = i + theiler; j0 < n; j0 += BLOCK) {
+                    int j1 = Math.min(n, j0 + BLOCK);
                     seg.distances(i, j0, j1, buf);
-                    int len = j1 - j0;
-                    for (int q = 0; q < len; q++) {
+                    for (int q = j0; q < j1; q++) {
                         long v = Double.doubleToRawLongBits(buf[q]);
                         if (v < hi) {
                             if (v < lo) {

@@ -32,14 +32,14 @@ final class LineScan {
     private final int w;
     private final int n;
     private final int words;
-    private final long tb1;
+    private final double threshold;
     private final int a;
     private final int b;
     private final boolean openTop;
     private final boolean openBottom;
     private final int[] diag;
     private final int[] col;
-    private final double[] buf = new double[BLOCK];
+    private final double[] buf;
     private final PlotMarks plot;
     private long[] cur;
     private long[] prev;
@@ -54,7 +54,7 @@ final class LineScan {
         this.w = theiler;
         this.n = seg.vectors();
         this.words = (n >>> 6) + 1;
-        this.tb1 = Double.doubleToRawLongBits(valueThreshold) + 1;
+        this.threshold = valueThreshold;
         this.a = a;
         this.b = b;
         this.openTop = a > 0;
@@ -69,6 +69,7 @@ final class LineScan {
         this.botCol = openBottom ? new int[n + 1] : null;
         this.plot = plot;
         this.cur = new long[words];
+        this.buf = new double[n];
         this.prev = new long[words];
     }
 
@@ -109,7 +110,7 @@ final class LineScan {
         int j0 = jStart & ~63;
         java.util.Arrays.fill(cur, ws, j0 >>> 6, 0L);
         for (int blk = j0; blk < n; blk += BLOCK) {
-            seg.recurrenceBits(i, blk, Math.min(n, blk + BLOCK), buf, tb1, cur);
+            seg.recurrenceBits(i, blk, Math.min(n, blk + BLOCK), buf, threshold, cur);
         }
         cur[j0 >>> 6] &= -1L << (jStart & 63);
         java.util.Arrays.fill(cur, ((n - 1) >>> 6) + 1, words, 0L);

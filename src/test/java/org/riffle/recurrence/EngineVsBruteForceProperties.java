@@ -82,7 +82,7 @@ class EngineVsBruteForceProperties {
     void targetRateRadiusIsTheExactOrderStatistic(@ForAll @LongRange(min = 1, max = 1_000_000) long seed,
                                                   @ForAll @IntRange(min = 3, max = 120) int len,
                                                   @ForAll boolean coarse,
-                                                  @ForAll @IntRange(min = 1, max = 3) int m,
+                                                  @ForAll @IntRange(min = 1, max = 6) int m,
                                                   @ForAll @IntRange(min = 1, max = 3) int tau,
                                                   @ForAll @IntRange(min = 1, max = 4) int w,
                                                   @ForAll boolean maxNorm,
