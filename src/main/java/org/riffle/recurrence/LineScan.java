@@ -4,8 +4,9 @@ import java.util.concurrent.CancellationException;
 
 /**
  * Scans a band of rows [a, b) of the upper triangle (j − i ≥ w) of one segment's recurrence matrix and
- * counts its lines, holding only O(N) state: two rows of recurrence bits, one run counter per diagonal and
- * one per column. Each row is computed as bits (64 cells a word), then:
+ * counts its lines, holding only O(N) state: two rows of recurrence bits and the first row of the open run
+ * on each diagonal and each column. Each row is computed as bits (64 cells a word), then, with word-wide
+ * bit operations, so that the work is per line rather than per recurrent cell:
  * <ul>
  * <li>a diagonal run ends where the previous row's bit j − 1 is set and this row's bit j is not;</li>
  * <li>a column run (the upper part of a vertical line) ends where the previous row's bit j is set and this
@@ -37,6 +38,7 @@ final class LineScan {
     private final int b;
     private final boolean openTop;
     private final boolean openBottom;
+    /** First row of the run open on each diagonal j − i, and on each column j. */
     private final int[] diag;
     private final int[] col;
     private final double[] buf;
@@ -87,8 +89,11 @@ final class LineScan {
                 throw new CancellationException("recurrence analysis cancelled");
             }
             fillBits(i);
-            ends(i);
-            starts(i);
+            columnsAndDiagonals(i);
+            rowRuns(i);
+            if (plot != null) {
+                mark(i);
+            }
             long[] t = prev;
             prev = cur;
             cur = t;
@@ -116,71 +121,81 @@ final class LineScan {
         java.util.Arrays.fill(cur, ((n - 1) >>> 6) + 1, words, 0L);
     }
 
-    /** Records the diagonal and column runs that ended in row i − 1. */
-    private void ends(int i) {
+    /**
+     * Compares row i with row i − 1, word by word: records the diagonal and column runs that ended in row
+     * i − 1 (length = i − their first row) and notes the first row of the runs that begin in row i. The
+     * work is per line, not per recurrent cell.
+     */
+    private void columnsAndDiagonals(int i) {
         for (int k = (i - 1 + w) >>> 6; k < words; k++) {
             long p = prev[k];
             long c = cur[k];
+            recurrent += Long.bitCount(c);
             long sp = (p << 1) | (k > 0 ? prev[k - 1] >>> 63 : 0L);
-            long e = sp & ~c;
-            while (e != 0) {
-                int j = (k << 6) | Long.numberOfTrailingZeros(e);
-                int d = j - i;
-                int run = diag[d];
-                diag[d] = 0;
-                if (openTop && i - run == a) {
-                    topDiag[d] = run;
+            int base = k << 6;
+            for (long e = sp & ~c; e != 0; e &= e - 1) {
+                int d = base + Long.numberOfTrailingZeros(e) - i;
+                int first = diag[d];
+                if (openTop && first == a) {
+                    topDiag[d] = i - first;
                 } else {
-                    diagHist[run]++;
+                    diagHist[i - first]++;
                 }
-                e &= e - 1;
             }
-            e = p & ~c;
-            while (e != 0) {
-                int j = (k << 6) | Long.numberOfTrailingZeros(e);
-                int run = col[j];
-                col[j] = 0;
-                if (openTop && i - run == a) {
-                    topCol[j] = run;
+            for (long e = c & ~sp; e != 0; e &= e - 1) {
+                diag[base + Long.numberOfTrailingZeros(e) - i] = i;
+            }
+            for (long e = p & ~c; e != 0; e &= e - 1) {
+                int j = base + Long.numberOfTrailingZeros(e);
+                int first = col[j];
+                if (openTop && first == a) {
+                    topCol[j] = i - first;
                 } else {
-                    vertHist[run]++;
+                    vertHist[i - first]++;
                 }
-                e &= e - 1;
+            }
+            for (long e = c & ~p; e != 0; e &= e - 1) {
+                col[base + Long.numberOfTrailingZeros(e)] = i;
             }
         }
     }
 
-    /** Extends the runs through row i's recurrent cells and records the row's own runs. */
-    private void starts(int i) {
-        int last = -2;
-        int run = 0;
+    /**
+     * Records row i's own runs of recurrent cells: by symmetry, the lower parts of the vertical lines in
+     * column i. A run's first and last cells are found with shifts, a run may span words.
+     */
+    private void rowRuns(int i) {
+        int open = -1;
         for (int k = (i + w) >>> 6; k < words; k++) {
             long c = cur[k];
             if (c == 0) {
                 continue;
             }
-            recurrent += Long.bitCount(c);
-            while (c != 0) {
-                int j = (k << 6) | Long.numberOfTrailingZeros(c);
-                diag[j - i]++;
-                col[j]++;
-                if (j == last + 1) {
-                    run++;
-                } else {
-                    if (run > 0) {
-                        vertHist[run]++;
-                    }
-                    run = 1;
+            long before = k > 0 ? cur[k - 1] >>> 63 : 0L;
+            long after = k + 1 < words ? cur[k + 1] << 63 : 0L;
+            long firsts = c & ~((c << 1) | before);
+            long lasts = c & ~((c >>> 1) | after);
+            int base = k << 6;
+            for (; lasts != 0; lasts &= lasts - 1) {
+                int last = Long.numberOfTrailingZeros(lasts);
+                if (firsts != 0 && Long.numberOfTrailingZeros(firsts) <= last) {
+                    open = base + Long.numberOfTrailingZeros(firsts);
+                    firsts &= firsts - 1;
                 }
-                last = j;
-                if (plot != null) {
-                    plot.mark(i, j);
-                }
-                c &= c - 1;
+                vertHist[base + last - open + 1]++;
+            }
+            if (firsts != 0) {
+                open = base + Long.numberOfTrailingZeros(firsts);
             }
         }
-        if (run > 0) {
-            vertHist[run]++;
+    }
+
+    /** Sets the thumbnail marks of row i's recurrent cells. */
+    private void mark(int i) {
+        for (int k = (i + w) >>> 6; k < words; k++) {
+            for (long c = cur[k]; c != 0; c &= c - 1) {
+                plot.mark(i, (k << 6) | Long.numberOfTrailingZeros(c));
+            }
         }
     }
 
@@ -192,15 +207,15 @@ final class LineScan {
             while (c != 0) {
                 int j = (k << 6) | Long.numberOfTrailingZeros(c);
                 int d = j - i;
-                if (openTop && b - diag[d] == a) {
-                    topDiag[d] = -diag[d];
+                if (openTop && diag[d] == a) {
+                    topDiag[d] = -(b - a);
                 } else {
-                    botDiag[d] = diag[d];
+                    botDiag[d] = b - diag[d];
                 }
-                if (openTop && b - col[j] == a) {
-                    topCol[j] = -col[j];
+                if (openTop && col[j] == a) {
+                    topCol[j] = -(b - a);
                 } else {
-                    botCol[j] = col[j];
+                    botCol[j] = b - col[j];
                 }
                 c &= c - 1;
             }
