@@ -1,7 +1,10 @@
 package org.riffle.reservoir;
 
 import java.util.Arrays;
+import java.util.List;
+import java.util.Map;
 import java.util.concurrent.CancellationException;
+import java.util.concurrent.ConcurrentHashMap;
 
 /**
  * A seeded sparse reservoir: the recurrent matrix W, the input and bias weights, and the leaky-tanh
@@ -14,7 +17,8 @@ import java.util.concurrent.CancellationException;
  * predicts as well as a fully random reservoir). The structure lets the update run as c contiguous,
  * vectorisable passes instead of scattered look-ups. W is rescaled by target radius / actual radius, the
  * actual radius computed from all eigenvalues ({@link SpectralRadius}); rebuilding with another radius,
- * leak or scaling but the same seed, size and sparsity reuses the draw and its eigenvalues.
+ * leak or scaling but the same seed, size and sparsity reuses the draw and its eigenvalues, and so does a
+ * later {@link #build} with the same seed, size and sparsity (draws are kept per JVM).
  *
  * <p>The activation is tanh evaluated as Lambert's continued fraction truncated to a [7/6] rational
  * function and clamped to ±1 beyond |v| = 4.97 (absolute error below 1e-4, slope never above 1; tested
@@ -61,8 +65,29 @@ public final class Reservoir {
         }
     }
 
-    /** Draws the reservoir of {@code params} from its seed. */
+    /**
+     * The random draws already made, by seed, size and sparsity: every channel of a log is judged with
+     * the same seeded reservoir, and its eigenvalues cost far more than the rest of a build. Bounded;
+     * cleared when full.
+     */
+    private static final Map<List<Long>, Reservoir> DRAWS = new ConcurrentHashMap<>();
+    private static final int MAX_DRAWS = 16;
+
+    /** The reservoir of {@code params}: drawn from its seed, or its earlier draw with these settings. */
     public static Reservoir build(EsnParams params) {
+        List<Long> key = List.of(params.seed(), (long) params.units(), (long) params.connections());
+        Reservoir drawn = DRAWS.get(key);
+        if (drawn == null) {
+            drawn = draw(params);
+            if (DRAWS.size() >= MAX_DRAWS) {
+                DRAWS.clear();
+            }
+            DRAWS.putIfAbsent(key, drawn);
+        }
+        return drawn.with(params);
+    }
+
+    private static Reservoir draw(EsnParams params) {
         int n = params.units();
         int c = params.connections();
         Rng rng = new Rng(params.seed());
@@ -103,6 +128,9 @@ public final class Reservoir {
     public Reservoir with(EsnParams other) {
         if (!params.sameStructure(other)) {
             return build(other);
+        }
+        if (other.equals(params)) {
+            return this;
         }
         return new Reservoir(other, offsets, raw, rawRadius, rawIn, rawBias);
     }
