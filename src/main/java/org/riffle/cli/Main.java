@@ -1,11 +1,35 @@
 package org.riffle.cli;
 
 import java.io.PrintWriter;
+import java.nio.file.InvalidPathException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.function.Supplier;
 import org.riffle.log.LogException;
+import org.riffle.log.ReadOptions;
 import picocli.CommandLine;
 
 /** The entry point: builds the command line, runs it, exits with its status. */
 public final class Main {
+    /** The subcommands by name, in the order the help lists them. */
+    private static final Map<String, Supplier<Object>> SUBCOMMANDS = new LinkedHashMap<>();
+
+    static {
+        SUBCOMMANDS.put("channels", ChannelsCommand::new);
+        SUBCOMMANDS.put("spectrum", SpectrumCommand::new);
+        SUBCOMMANDS.put("open", OpenCommand::new);
+        SUBCOMMANDS.put("report", ReportCommand::new);
+        SUBCOMMANDS.put("baseline", BaselineCommand::new);
+        SUBCOMMANDS.put("demo", DemoCommand::new);
+        SUBCOMMANDS.put("rqa", RqaCommand::new);
+        SUBCOMMANDS.put("trend", TrendCommand::new);
+        SUBCOMMANDS.put("health", HealthCommand::new);
+        SUBCOMMANDS.put("bench", BenchCommand::new);
+    }
+
     private Main() {
     }
 
@@ -20,7 +44,15 @@ public final class Main {
     public static int run(String[] args, PrintWriter out, PrintWriter err) {
         PrintWriter e = new PrintWriter(new SafeWriter(err), true);
         try {
-            return commandLine(new PrintWriter(new SafeWriter(out), true), e).execute(args);
+            List<Path> logs = plainLogs(args);
+            if (logs != null) {
+                try {
+                    return OpenCommand.open(logs, ReadOptions.defaults(), false, e);
+                } catch (Exception ex) {
+                    return failed(ex, e);
+                }
+            }
+            return commandLine(new PrintWriter(new SafeWriter(out), true), e, args).execute(args);
         } catch (OutOfMemoryError oom) {
             // The arrays that held the log are unreachable once the command has unwound, so there is
             // room for this line. A log too large for the heap is read in reduced form (log.Reduction);
@@ -46,28 +78,69 @@ public final class Main {
         return false;
     }
 
-    /** The configured command line, for tests and for {@link #run}. */
+    /**
+     * The logs of a plain {@code riffle LOG [LOG...]}: every argument a path, none an option, an
+     * {@code @file} or {@code -} (standard input), the first not a subcommand's name; else null. Such a
+     * command line opens the screen without building the command line parser, which on a cold JVM costs
+     * about half a second (measured on the 2-core bench machine), a second on the way to the first frame.
+     */
+    static List<Path> plainLogs(String[] args) {
+        if (args.length == 0 || SUBCOMMANDS.containsKey(args[0])) {
+            return null;
+        }
+        List<Path> logs = new ArrayList<>();
+        for (String a : args) {
+            if (a.isEmpty() || a.startsWith("-") || a.startsWith("@")) {
+                return null;
+            }
+            try {
+                logs.add(Path.of(a));
+            } catch (InvalidPathException bad) {
+                return null;
+            }
+        }
+        return logs;
+    }
+
+    /** What a failed command prints and returns: one line, never a stack trace unless asked for. */
+    static int failed(Exception ex, PrintWriter e) {
+        if (ex instanceof LogException) {
+            e.println("riffle: " + ex.getMessage());
+            return ExitCode.BAD_INPUT;
+        }
+        if (outOfMemory(ex)) {
+            e.println(outOfMemory());
+            return ExitCode.FAILED;
+        }
+        e.println("riffle: internal error: " + ex + " (set RIFFLE_DEBUG=1 for details; please report)");
+        if (System.getenv("RIFFLE_DEBUG") != null) {
+            ex.printStackTrace(e);
+        }
+        return ExitCode.INTERNAL;
+    }
+
+    /** The configured command line with every subcommand, for tests and for the help. */
     static CommandLine commandLine(PrintWriter out, PrintWriter err) {
+        return commandLine(out, err, new String[0]);
+    }
+
+    /**
+     * The configured command line for {@code args}: when the first argument names a subcommand, with that
+     * subcommand alone (the others are not needed to run it, and building each costs start-up time); else
+     * with all of them, in the order the help lists them.
+     */
+    static CommandLine commandLine(PrintWriter out, PrintWriter err, String[] args) {
         CommandLine cl = new CommandLine(new RiffleCommand());
+        Supplier<Object> only = args.length > 0 ? SUBCOMMANDS.get(args[0]) : null;
+        if (only != null) {
+            cl.addSubcommand(args[0], only.get());
+        } else {
+            SUBCOMMANDS.forEach((name, command) -> cl.addSubcommand(name, command.get()));
+        }
         cl.setOut(out);
         cl.setErr(err);
-        cl.setExecutionExceptionHandler((ex, commandLine, parseResult) -> {
-            PrintWriter e = commandLine.getErr();
-            if (ex instanceof LogException) {
-                e.println("riffle: " + ex.getMessage());
-                return ExitCode.BAD_INPUT;
-            }
-            if (outOfMemory(ex)) {
-                e.println(outOfMemory());
-                return ExitCode.FAILED;
-            }
-            e.println("riffle: internal error: " + ex + " (set RIFFLE_DEBUG=1 for details; please report)");
-            if (System.getenv("RIFFLE_DEBUG") != null) {
-                ex.printStackTrace(e);
-            }
-            return ExitCode.INTERNAL;
-        });
-        cl.setParameterExceptionHandler((ex, args) -> {
+        cl.setExecutionExceptionHandler((ex, commandLine, parseResult) -> failed(ex, commandLine.getErr()));
+        cl.setParameterExceptionHandler((ex, rest) -> {
             CommandLine c = ex.getCommandLine();
             c.getErr().println("riffle: " + ex.getMessage());
             c.getErr().println("Try '" + c.getCommandSpec().qualifiedName() + " --help' for more.");

@@ -11,7 +11,10 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
-/** The top-level {@code riffle} command: {@code riffle LOG...} opens the screen; alone it lists the subcommands. */
+/**
+ * The top-level {@code riffle} command: {@code riffle LOG...} opens the screen; alone it lists the
+ * subcommands, which {@link Main} adds (only the one asked for, when one is).
+ */
 @Command(name = "riffle",
         mixinStandardHelpOptions = true,
         versionProvider = VersionProvider.class,
@@ -19,18 +22,6 @@ import picocli.CommandLine.Spec;
         description = {
             "Field triage of equipment sensor logs: every channel judged against its healthy baseline.",
             "Screening aid only: decisions belong to qualified maintenance staff under site procedures and local codes."
-        },
-        subcommands = {
-            ChannelsCommand.class,
-            SpectrumCommand.class,
-            OpenCommand.class,
-            ReportCommand.class,
-            BaselineCommand.class,
-            DemoCommand.class,
-            RqaCommand.class,
-            TrendCommand.class,
-            HealthCommand.class,
-            BenchCommand.class,
         })
 final class RiffleCommand implements Callable<Integer> {
     @Spec

@@ -2,11 +2,15 @@ package org.riffle.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.PrintWriter;
 import java.io.StringWriter;
+import java.nio.file.Path;
+import java.util.List;
 import org.junit.jupiter.api.Test;
+import picocli.CommandLine;
 
 class MainTest {
     /** Output and status of one run. */
@@ -51,5 +55,37 @@ class MainTest {
         Run r = run("channels", "--no-such-option", "x.csv");
         assertEquals(ExitCode.USAGE, r.status());
         assertTrue(r.err().startsWith("riffle: Unknown option: '--no-such-option'"), r.err());
+    }
+
+    @Test
+    void onlyAPlainListOfPathsSkipsTheParser() {
+        assertEquals(List.of(Path.of("a.csv"), Path.of("logs/b.wav")), Main.plainLogs(new String[] {"a.csv", "logs/b.wav"}));
+        assertNull(Main.plainLogs(new String[0]), "no arguments: the usage");
+        assertNull(Main.plainLogs(new String[] {"--ascii", "a.csv"}), "an option");
+        assertNull(Main.plainLogs(new String[] {"a.csv", "-"}), "standard input");
+        assertNull(Main.plainLogs(new String[] {"@args.txt"}), "an argument file");
+        assertNull(Main.plainLogs(new String[] {"report", "a.csv"}), "a subcommand");
+        assertNull(Main.plainLogs(new String[] {"a.csv", ""}), "an empty argument");
+    }
+
+    /** The subcommands are added by name in Main; each name must be the one its class declares. */
+    @Test
+    void everySubcommandIsRegisteredUnderItsOwnNameAndAloneWhenAsked() {
+        CommandLine all = Main.commandLine(new PrintWriter(new StringWriter()), new PrintWriter(new StringWriter()));
+        assertEquals(List.of("channels", "spectrum", "open", "report", "baseline", "demo", "rqa", "trend", "health",
+                "bench"), List.copyOf(all.getSubcommands().keySet()));
+        all.getSubcommands().forEach((name, sub) -> assertEquals(name,
+                sub.getCommand().getClass().getAnnotation(CommandLine.Command.class).name()));
+        CommandLine lean = Main.commandLine(new PrintWriter(new StringWriter()), new PrintWriter(new StringWriter()),
+                new String[] {"report", "x.csv"});
+        assertEquals(List.of("report"), List.copyOf(lean.getSubcommands().keySet()));
+    }
+
+    @Test
+    void anUnknownWordIsALogToOpenAndWithoutATerminalThatIsOneLine() {
+        Run r = run("no-such-file.csv");
+        assertEquals(ExitCode.NO_TERMINAL, r.status());
+        assertTrue(r.err().startsWith("riffle: no terminal"), r.err());
+        assertEquals(1, r.err().strip().lines().count(), r.err());
     }
 }
