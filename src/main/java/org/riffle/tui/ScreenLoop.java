@@ -52,6 +52,11 @@ final class ScreenLoop {
         queue.add(e);
     }
 
+    /** Whether no log's analysis is running any more (none started yet counts as running). */
+    boolean settled() {
+        return controller.s.sources.stream().noneMatch(Source::running);
+    }
+
     /** Called after each frame with the number of keys handled so far (for the benchmark). */
     void onFrame(LongConsumer callback) {
         this.onFrame = callback;
@@ -60,6 +65,7 @@ final class ScreenLoop {
     /** Draws the first frame, starts the analysis, and serves events until the screen ends. */
     Controller.Outcome run() throws IOException, InterruptedException {
         renderer.render(controller, true);
+        onFrame.accept(keysHandled);
         controller.startAll();
         while (controller.outcome() == Controller.Outcome.RUNNING) {
             step(TICK_NANOS);

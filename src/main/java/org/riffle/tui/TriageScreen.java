@@ -3,7 +3,6 @@ package org.riffle.tui;
 import com.googlecode.lanterna.input.KeyStroke;
 import com.googlecode.lanterna.input.KeyType;
 import com.googlecode.lanterna.screen.TerminalScreen;
-import com.googlecode.lanterna.terminal.ansi.UnixLikeTerminal.CtrlCBehaviour;
 import com.googlecode.lanterna.terminal.ansi.UnixTerminal;
 import java.io.IOException;
 import java.nio.charset.Charset;
@@ -49,9 +48,10 @@ public final class TriageScreen {
     public static Ending open(List<Recording> recordings, ScreenOptions options, NoteDesk desk)
             throws IOException, InterruptedException {
         Charset cs = options.ascii() ? StandardCharsets.US_ASCII : StandardCharsets.UTF_8;
-        UnixTerminal terminal = new UnixTerminal(System.in, System.out, cs, CtrlCBehaviour.TRAP);
+        UnixTerminal terminal = new TtyTerminal(cs);
         TerminalScreen screen = new TerminalScreen(terminal);
         ScreenLoop loop = new ScreenLoop(screen, recordings, options, desk);
+        FrameLog.fromEnvironment(System.getenv()).ifPresent(log -> loop.onFrame(keys -> log.frame(loop.settled())));
         try {
             screen.startScreen();
             terminal.addResizeListener((t, size) -> loop.post(new Event.Resized()));
