@@ -77,6 +77,9 @@ final class Numbers {
             fraction = i - from;
             digits += fraction;
         }
+        if (digits == 0 && i < e && ((b[i] | 0x20) >= 'a' && (b[i] | 0x20) <= 'z')) {
+            return Float.NaN; // a word (RUN, NaN, OVF): no number starts with a letter
+        }
         if (digits == 0 || digits > 18) {
             return slow(b, s, e, decimalComma);
         }

@@ -38,9 +38,9 @@ final class Sniffer {
      * @throws LogException when there is no table to read, or the options clash with the file
      */
     static Layout sniff(String file, List<String> head, ReadOptions opt, boolean wholeFile) throws LogException {
-        head = joinQuoted(head);
-        List<Integer> content = new ArrayList<>();
         int skip = opt.skipRows().orElse(0);
+        head = joinQuoted(head, skip);
+        List<Integer> content = new ArrayList<>();
         for (int i = skip; i < head.size() && content.size() < MAX_LINES; i++) {
             if (head.get(i) != null && !isBlankOrComment(head.get(i))) {
                 content.add(i);
@@ -76,11 +76,16 @@ final class Sniffer {
 
     /**
      * The lines with a quoted field that spans lines joined into the first of them (with a line feed);
-     * the lines it swallowed become null, so indices stay line numbers.
+     * the lines it swallowed become null, so indices stay line numbers. Only as far as the sniffer looks:
+     * the head is cut after the {@link #MAX_LINES}-th content line from line {@code skip} on.
      */
-    static List<String> joinQuoted(List<String> head) {
+    static List<String> joinQuoted(List<String> head, int skip) {
         List<String> out = new ArrayList<>(head);
+        int content = 0;
         for (int i = 0; i < out.size(); i++) {
+            if (i >= skip && content >= MAX_LINES) {
+                return out.subList(0, i);
+            }
             String l = out.get(i);
             int j = i;
             while ((Splitter.quotes(l) & 1) == 1 && j + 1 < out.size()) {
@@ -88,6 +93,7 @@ final class Sniffer {
                 out.set(j, null);
             }
             out.set(i, l);
+            content += i >= skip && !isBlankOrComment(l) ? 1 : 0;
             i = j;
         }
         return out;

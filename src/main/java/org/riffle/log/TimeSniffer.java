@@ -22,6 +22,12 @@ final class TimeSniffer {
     private static final double SHARE = 0.9;
     private static final double EPOCH_S = 9.46e8;
     private static final double EPOCH_MS = 9.46e11;
+    /** A date without a time of day, e.g. 2026-03-01 or 01.03.2026. */
+    private static final Pattern DATE_ONLY = Pattern.compile("\\d{1,4}[-./]\\d{1,2}[-./]\\d{1,4}");
+    /** A time stamp that ends in a UTC offset or Z. */
+    private static final Pattern OFFSET = Pattern.compile(".*\\d(Z|z|[+-]\\d\\d(:?\\d\\d)?)");
+    /** A time column named by its 1-based number. */
+    private static final Pattern COLUMN_NUMBER = Pattern.compile("\\d{1,6}");
     private static final Pattern TIME_NAME = Pattern.compile("(time|t|timestamp|ts|elapsed|elapsedtime|seconds|secs?"
             + "|epoch|epochtime|unix|unixtime|unixtimestamp|zeit|reltime|relativetime)(s|sec|ms|millis|milliseconds"
             + "|seconds)?");
@@ -103,7 +109,7 @@ final class TimeSniffer {
                 return j;
             }
         }
-        if (want.matches("\\d{1,6}")) {
+        if (COLUMN_NUMBER.matcher(want).matches()) {
             int n = Integer.parseInt(want);
             return n >= 1 && n <= names.length ? n - 1 : -1;
         }
@@ -134,10 +140,10 @@ final class TimeSniffer {
             ymd += Stamps.parse(c, Stamps.Order.YMD) != Stamps.FAIL ? 1 : 0;
             dmy += Stamps.parse(c, Stamps.Order.DMY) != Stamps.FAIL ? 1 : 0;
             mdy += Stamps.parse(c, Stamps.Order.MDY) != Stamps.FAIL ? 1 : 0;
-            dateOnly += c.length() <= 10 && c.matches("\\d{1,4}[-./]\\d{1,2}[-./]\\d{1,4}") ? 1 : 0;
+            dateOnly += c.length() <= 10 && DATE_ONLY.matcher(c).matches() ? 1 : 0;
             tod += Stamps.timeOfDay(c) != Stamps.FAIL ? 1 : 0;
             numeric += Numbers.looksNumeric(c) ? 1 : 0;
-            offset |= c.matches(".*\\d(Z|z|[+-]\\d\\d(:?\\d\\d)?)");
+            offset |= OFFSET.matcher(c).matches();
         }
         return new Stats(filled, ymd, dmy, mdy, dateOnly, tod, numeric, offset, example, exampleLine);
     }
