@@ -5,6 +5,7 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.Callable;
 import org.riffle.log.LogException;
 import org.riffle.log.LogReader;
@@ -51,14 +52,32 @@ final class OpenCommand implements Callable<Integer> {
             return ExitCode.NO_TERMINAL;
         }
         Warmup.start();
-        List<Recording> recordings = new ArrayList<>();
-        for (Path p : logs) {
-            recordings.add(LogReader.read(p, readOptions));
-        }
         ScreenOptions options = ScreenOptions.fromEnvironment(System.getenv(), ascii);
-        try (VisitDesk desk = VisitDesk.forLogs(logs, options.ascii())) {
-            TriageScreen.Ending end = TriageScreen.open(recordings, options, desk);
-            return end == TriageScreen.Ending.QUIT ? ExitCode.OK : ExitCode.INTERRUPTED;
+        // the terminal and the note desk are made ready on threads of their own while the logs are read
+        CompletableFuture<VisitDesk> deskReady = new CompletableFuture<>();
+        Thread deskMaker = new Thread(() -> {
+            try {
+                deskReady.complete(VisitDesk.forLogs(logs, options.ascii()));
+            } catch (RuntimeException | Error e) {
+                deskReady.completeExceptionally(e);
+            }
+        }, "riffle-desk");
+        deskMaker.setDaemon(true);
+        deskMaker.start();
+        try (TriageScreen.Tty tty = TriageScreen.take(options.ascii())) {
+            List<Recording> recordings = new ArrayList<>();
+            try {
+                for (Path p : logs) {
+                    recordings.add(LogReader.read(p, readOptions));
+                }
+            } catch (LogException | RuntimeException e) {
+                deskReady.thenAccept(VisitDesk::close);
+                throw e;
+            }
+            try (VisitDesk desk = deskReady.join()) {
+                TriageScreen.Ending end = TriageScreen.open(tty, recordings, options, desk);
+                return end == TriageScreen.Ending.QUIT ? ExitCode.OK : ExitCode.INTERRUPTED;
+            }
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
             return ExitCode.INTERRUPTED;

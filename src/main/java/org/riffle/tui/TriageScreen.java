@@ -7,7 +7,9 @@ import com.googlecode.lanterna.terminal.ansi.UnixTerminal;
 import java.io.IOException;
 import java.nio.charset.Charset;
 import java.nio.charset.StandardCharsets;
+import java.util.ArrayList;
 import java.util.List;
+import java.util.function.Consumer;
 import org.riffle.log.Recording;
 
 /**
@@ -29,6 +31,9 @@ public final class TriageScreen {
         INTERRUPTED
     }
 
+    /** Exit status of a Ctrl-C before the screen opened: 128 + SIGINT, as a shell reports it. */
+    static final int INTERRUPTED_STATUS = 130;
+
     private TriageScreen() {
     }
 
@@ -38,24 +43,144 @@ public final class TriageScreen {
     }
 
     /**
+     * The process's terminal, taken on a thread of its own while the logs are read (setting its modes
+     * runs a process, which takes a while on a slow machine), with its keys read from then on. A Ctrl-C
+     * before the screen opens stops riffle at once: the terminal is restored and the process exits with
+     * status 130, since nothing has been typed that could be lost. {@link #close} restores the terminal
+     * when the screen never opened (a log could not be read).
+     *
+     * <p>Thread-safe.
+     */
+    public static final class Tty implements AutoCloseable {
+        private final Thread taker;
+        private final Object lock = new Object();
+        private final List<KeyStroke> early = new ArrayList<>();
+        private UnixTerminal terminal;
+        private IOException failure;
+        private Consumer<KeyStroke> keys;
+        private boolean opened;
+
+        private Tty(Charset charset) {
+            taker = new Thread(() -> take(charset), "riffle-tty");
+            taker.setDaemon(true);
+            taker.start();
+        }
+
+        private void take(Charset charset) {
+            try {
+                UnixTerminal t = new TtyTerminal(charset);
+                synchronized (lock) {
+                    terminal = t;
+                }
+                startKeyReader(t, this::key);
+            } catch (IOException e) {
+                synchronized (lock) {
+                    failure = e;
+                }
+            }
+        }
+
+        private void key(KeyStroke k) {
+            Consumer<KeyStroke> to;
+            UnixTerminal abandon = null;
+            synchronized (lock) {
+                to = keys;
+                if (to == null) {
+                    if (k.getKeyType() == KeyType.Character && k.isCtrlDown() && k.getCharacter() == 'c') {
+                        abandon = terminal;
+                    } else {
+                        early.add(k);
+                        return;
+                    }
+                }
+            }
+            if (abandon != null) {
+                restore(abandon);
+                System.exit(INTERRUPTED_STATUS);
+            }
+            to.accept(k);
+        }
+
+        /** The terminal, once taken; keys go to {@code to} from now on (those typed before first). */
+        UnixTerminal open(Consumer<KeyStroke> to) throws IOException, InterruptedException {
+            taker.join();
+            synchronized (lock) {
+                if (failure != null) {
+                    throw failure;
+                }
+                opened = true;
+                early.forEach(to);
+                early.clear();
+                keys = to;
+                return terminal;
+            }
+        }
+
+        /** Restores the terminal if the screen never opened on it; else nothing (the screen restores it). */
+        @Override
+        public void close() {
+            try {
+                taker.join();
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+            }
+            synchronized (lock) {
+                if (!opened && terminal != null) {
+                    restore(terminal);
+                }
+            }
+        }
+
+        private static void restore(UnixTerminal t) {
+            try {
+                t.close();
+            } catch (IOException | RuntimeException e) {
+                // Lanterna's shutdown hook tries again on exit
+            }
+        }
+    }
+
+    /**
+     * Starts taking the process's terminal for a screen drawn in ASCII or UTF-8.
+     *
+     * @param ascii true to draw with ASCII only ({@link ScreenOptions#ascii()})
+     */
+    public static Tty take(boolean ascii) {
+        return new Tty(ascii ? StandardCharsets.US_ASCII : StandardCharsets.UTF_8);
+    }
+
+    /**
      * Runs the screen on the process's terminal until the technician quits.
      *
+     * @param tty the terminal, from {@link #take} with the same ASCII choice as {@code options}
      * @param recordings the logs, in the order named
      * @param options drawing options (see {@link ScreenOptions#fromEnvironment})
      * @param desk where notes and drafts go
      * @throws IOException when the terminal cannot be driven
      */
-    public static Ending open(List<Recording> recordings, ScreenOptions options, NoteDesk desk)
+    public static Ending open(Tty tty, List<Recording> recordings, ScreenOptions options, NoteDesk desk)
             throws IOException, InterruptedException {
-        Charset cs = options.ascii() ? StandardCharsets.US_ASCII : StandardCharsets.UTF_8;
-        UnixTerminal terminal = new TtyTerminal(cs);
+        List<KeyStroke> pending = new ArrayList<>();
+        ScreenLoop[] ready = new ScreenLoop[1];
+        UnixTerminal terminal = tty.open(k -> {
+            synchronized (pending) {
+                if (ready[0] == null) {
+                    pending.add(k);
+                    return;
+                }
+            }
+            ready[0].post(new Event.Key(k));
+        });
         TerminalScreen screen = new TerminalScreen(terminal);
         ScreenLoop loop = new ScreenLoop(screen, recordings, options, desk);
+        synchronized (pending) {
+            pending.forEach(k -> loop.post(new Event.Key(k)));
+            ready[0] = loop;
+        }
         FrameLog.fromEnvironment(System.getenv()).ifPresent(log -> loop.onFrame(keys -> log.frame(loop.settled())));
         try {
             screen.startScreen();
             terminal.addResizeListener((t, size) -> loop.post(new Event.Resized()));
-            startKeyReader(terminal, loop);
             Controller.Outcome o = loop.run();
             return o == Controller.Outcome.QUIT ? Ending.QUIT : Ending.INTERRUPTED;
         } finally {
@@ -68,7 +193,7 @@ public final class TriageScreen {
         }
     }
 
-    private static void startKeyReader(UnixTerminal terminal, ScreenLoop loop) {
+    private static void startKeyReader(UnixTerminal terminal, Consumer<KeyStroke> to) {
         Thread t = new Thread(() -> {
             try {
                 while (true) {
@@ -76,13 +201,13 @@ public final class TriageScreen {
                     if (k == null) {
                         continue;
                     }
-                    loop.post(new Event.Key(k));
+                    to.accept(k);
                     if (k.getKeyType() == KeyType.EOF) {
                         return;
                     }
                 }
             } catch (IOException | RuntimeException e) {
-                loop.post(new Event.Key(new KeyStroke(KeyType.EOF)));
+                to.accept(new KeyStroke(KeyType.EOF));
             }
         }, "riffle-keys");
         t.setDaemon(true);

@@ -46,10 +46,14 @@ class ScreenIT {
 
     /** The pane's script: remember the terminal settings, run riffle, record status and settings. */
     private Path script() throws IOException {
+        return script("af2-process.csv");
+    }
+
+    private Path script(String log) throws IOException {
         String s = "cd '" + dir + "'\n"
                 + "stty -g > stty-before.txt\n"
                 + "LANG=C.UTF-8 LC_ALL= LC_CTYPE= XDG_STATE_HOME='" + dir.resolve("state") + "' java -jar '"
-                + JAR.toAbsolutePath() + "' af2-process.csv\n"
+                + JAR.toAbsolutePath() + "' " + log + "\n"
                 + "echo $? > exit.txt\n"
                 + "stty -g > stty-after.txt\n"
                 + "sleep 300\n";
@@ -152,6 +156,42 @@ class ScreenIT {
                     Files.readString(dir.resolve("stty-after.txt")), "stty settings restored");
             String draft = Files.readString(dir.resolve(".af2-process.csv.riffle-draft"), StandardCharsets.UTF_8);
             assertTrue(draft.contains("left for the morning shift"), draft);
+        }
+    }
+
+    /**
+     * The terminal is taken while the log is still being read; a Ctrl-C then stops riffle at once (status
+     * 130) with the terminal restored, and no frame is ever drawn (the frame log stays empty). The log is
+     * an invented 3,000,000-row one, which takes seconds to read.
+     */
+    @Test
+    void ctrlCWhileTheLogIsReadStopsAtOnceAndRestoresTheTerminal() throws Exception {
+        Path big = dir.resolve("long.csv");
+        try (java.io.Writer w = Files.newBufferedWriter(big, StandardCharsets.US_ASCII)) {
+            w.write("seconds,level [bar]\n");
+            for (int i = 0; i < 3_000_000; i++) {
+                w.write(i + "," + (i % 997) / 10.0 + "\n");
+            }
+        }
+        Path frames = dir.resolve("frames.txt");
+        Path s = script("long.csv");
+        Files.writeString(s, Files.readString(s).replace("java -jar", "RIFFLE_FRAME_LOG='" + frames + "' java -jar"));
+        try (Tmux t = Tmux.start(dir, s, 100, 30)) {
+            // wait until riffle has set the terminal's modes (Ctrl-C is then a key, no longer a signal)
+            String tty = t.format("#{pane_tty}");
+            String before = Tmux.waitForFile(dir.resolve("stty-before.txt"), 30);
+            boolean raw = false;
+            for (int i = 0; i < 400 && !raw; i++) {
+                Process p = new ProcessBuilder("sh", "-c", "stty -g < " + tty).start();
+                raw = !new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8).strip().equals(before);
+                p.waitFor();
+                Thread.sleep(raw ? 0 : 20);
+            }
+            assertTrue(raw, "riffle never set the terminal's modes");
+            t.keys("C-c");
+            assertEquals("130", Tmux.waitForFile(dir.resolve("exit.txt"), 30), "exit status");
+            assertFalse(Files.exists(frames), "the screen had opened: the log was read before the Ctrl-C");
+            assertEquals(before, Files.readString(dir.resolve("stty-after.txt")).strip(), "stty settings restored");
         }
     }
 }
