@@ -24,6 +24,12 @@ import org.riffle.triage.TriageParams;
  */
 final class ScreenLoop {
     private static final long TICK_NANOS = TimeUnit.SECONDS.toNanos(1);
+    /**
+     * Shortest time between two frames drawn for analysis progress alone (ten a second): progress
+     * arrives in bursts from every channel, and a frame drawn for each took CPU from the analysis on a
+     * 2-core machine. Keys, resizes and finished analyses are drawn at once.
+     */
+    static final long PROGRESS_FRAME_NANOS = TimeUnit.MILLISECONDS.toNanos(100);
 
     private final BlockingQueue<Event> queue = new LinkedBlockingQueue<>();
     private final Renderer renderer;
@@ -31,6 +37,9 @@ final class ScreenLoop {
     final Controller controller;
     private long lastTick = System.nanoTime();
     private long keysHandled;
+    private long lastFrame = System.nanoTime() - PROGRESS_FRAME_NANOS;
+    /** Progress applied but not drawn yet. */
+    private boolean behind;
     private LongConsumer onFrame = k -> { };
 
     ScreenLoop(Screen screen, List<Recording> recordings, ScreenOptions options, NoteDesk desk) {
@@ -80,10 +89,19 @@ final class ScreenLoop {
         renderer.render(controller, full);
     }
 
-    /** Waits up to {@code timeoutNanos} for events, applies all queued ones, draws once. */
+    /**
+     * Waits up to {@code timeoutNanos} for events (less while progress waits to be drawn), applies all
+     * queued ones, and draws once: at once after a key, a resize or a finished analysis, else at most
+     * every {@link #PROGRESS_FRAME_NANOS}.
+     */
     void step(long timeoutNanos) throws IOException, InterruptedException {
-        Event e = queue.poll(timeoutNanos, TimeUnit.NANOSECONDS);
+        long wait = behind ? Math.max(0, Math.min(timeoutNanos, lastFrame + PROGRESS_FRAME_NANOS - System.nanoTime()))
+                : timeoutNanos;
+        Event e = queue.poll(wait, TimeUnit.NANOSECONDS);
+        boolean urgent = false;
         while (e != null && controller.outcome() == Controller.Outcome.RUNNING) {
+            urgent |= !(e instanceof Event.Progress || e instanceof Event.Updated);
+            behind = true;
             apply(e);
             e = queue.poll();
         }
@@ -91,9 +109,13 @@ final class ScreenLoop {
         if (now - lastTick >= TICK_NANOS) {
             lastTick = now;
             apply(new Event.Tick());
+            urgent = true;
         }
-        if (controller.outcome() == Controller.Outcome.RUNNING) {
+        if (controller.outcome() == Controller.Outcome.RUNNING
+                && (urgent || (behind && now - lastFrame >= PROGRESS_FRAME_NANOS))) {
             render();
+            lastFrame = System.nanoTime();
+            behind = false;
             onFrame.accept(keysHandled);
         }
     }
