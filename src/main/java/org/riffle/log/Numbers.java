@@ -86,7 +86,9 @@ final class Numbers {
         int exp = 0;
         if (i < e) {
             if (b[i] != 'e' && b[i] != 'E') {
-                return slow(b, s, e, decimalComma);
+                // only grouping marks, spaces or non-ASCII separators can still make a number (the
+                // fallback's forms); a date's '-', a time's ':' or a unit's letter cannot
+                return mayGroup(b[i]) ? slow(b, s, e, decimalComma) : Float.NaN;
             }
             i++;
             boolean expNeg = false;
@@ -129,6 +131,11 @@ final class Numbers {
             return Float.NaN;
         }
         return neg ? -f : f;
+    }
+
+    /** True for a byte that may follow leading digits in a form only {@link #slow} reads. */
+    private static boolean mayGroup(byte c) {
+        return c <= ' ' || c == ',' || c == '.' || c == '\'';
     }
 
     /** The general case: thousands grouping, odd forms, huge or tiny numbers, non-numbers. */

@@ -149,6 +149,13 @@ final class Splitter {
 
     /** Number of double quotes in {@code s}: odd means a quoted field continues on the next line. */
     static int quotes(CharSequence s) {
+        if (s instanceof String str) {
+            int n = 0;
+            for (int i = str.indexOf('"'); i >= 0; i = str.indexOf('"', i + 1)) {
+                n++;
+            }
+            return n;
+        }
         int n = 0;
         for (int i = 0; i < s.length(); i++) {
             if (s.charAt(i) == '"') {

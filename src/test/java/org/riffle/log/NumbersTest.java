@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertTimeoutPreemptively;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.math.BigDecimal;
+import java.nio.charset.StandardCharsets;
 import java.time.Duration;
 import java.util.SplittableRandom;
 import org.junit.jupiter.api.Test;
@@ -106,5 +107,26 @@ class NumbersTest {
         assertSameAsJdk("0." + "0".repeat(5_000) + "1e5010");
         assertSameAsJdk("1" + "0".repeat(30) + ".e-30");
         assertSameAsJdk(".5" + "0".repeat(40));
+    }
+
+    /** The fast path's early answers (a word, a date, a time) never differ from the general fallback. */
+    @Test
+    void theFastPathAgreesWithTheFallbackOnMixedText() {
+        String alphabet = "0123456789.,eE+-:/T x\t'aZ%";
+        SplittableRandom r = new SplittableRandom(20261202);
+        for (int k = 0; k < 200_000; k++) {
+            StringBuilder sb = new StringBuilder();
+            int len = 1 + r.nextInt(9);
+            for (int i = 0; i < len; i++) {
+                sb.append(alphabet.charAt(r.nextInt(alphabet.length())));
+            }
+            byte[] b = sb.toString().getBytes(StandardCharsets.UTF_8);
+            for (boolean comma : new boolean[] {false, true}) {
+                float fast = Numbers.parse(b, 0, b.length, comma);
+                float general = Numbers.slow(b, 0, b.length, comma);
+                assertEquals(Float.floatToIntBits(general), Float.floatToIntBits(fast),
+                        "'" + sb + "', decimal comma " + comma + ": " + fast + " vs " + general);
+            }
+        }
     }
 }
