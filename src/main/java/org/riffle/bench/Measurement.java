@@ -38,6 +38,9 @@ record Measurement(String name, Metric metric, double[] values) {
         if (!targetsApply || Double.isNaN(metric.target())) {
             return "-";
         }
+        if (Double.isNaN(median())) {
+            return "n/a";
+        }
         return median() <= metric.target() ? "met" : "MISSED";
     }
 }
