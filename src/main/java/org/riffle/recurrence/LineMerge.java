@@ -20,8 +20,17 @@ final class LineMerge {
         vertHist = new long[n + 1];
     }
 
+    private LineMerge(LineScan whole) {
+        diagHist = whole.diagHist;
+        vertHist = whole.vertHist;
+        recurrent = whole.recurrent;
+    }
+
     /** Merges {@code bands}, given top to bottom. */
     static LineMerge of(List<LineScan> bands, int vectors) {
+        if (bands.size() == 1 && bands.get(0).topDiag == null && bands.get(0).botDiag == null) {
+            return new LineMerge(bands.get(0)); // one band of the whole triangle: nothing to join
+        }
         LineMerge m = new LineMerge(vectors);
         int[] carryDiag = new int[vectors + 1];
         int[] carryCol = new int[vectors + 1];

@@ -130,8 +130,11 @@ final class LineScan {
         for (int k = (i - 1 + w) >>> 6; k < words; k++) {
             long p = prev[k];
             long c = cur[k];
-            recurrent += Long.bitCount(c);
             long sp = (p << 1) | (k > 0 ? prev[k - 1] >>> 63 : 0L);
+            if ((c | sp | p) == 0) {
+                continue; // nothing begins or ends here: most words, at a low recurrence rate
+            }
+            recurrent += Long.bitCount(c);
             int base = k << 6;
             for (long e = sp & ~c; e != 0; e &= e - 1) {
                 int d = base + Long.numberOfTrailingZeros(e) - i;
