@@ -20,8 +20,7 @@ final class Segment {
         }
     }
 
-    private final double[] s;
-    /** coords[k][j] = s[j + k·τ], the k-th coordinate of every delay vector j. */
+    /** coords[k][j] = x[from + j + k·τ], the k-th coordinate of every delay vector j (copies). */
     private final double[][] coords;
     private final double[] c0;
     private final double[] c1;
@@ -35,7 +34,6 @@ final class Segment {
 
     /** Embeds {@code series[from, to)}; the samples must be finite. */
     Segment(double[] series, int from, int to, Embedding e, RqaParams.Norm norm) {
-        this.s = java.util.Arrays.copyOfRange(series, from, to);
         this.from = from;
         this.m = e.dimension();
         this.tau = e.delay();
@@ -43,7 +41,8 @@ final class Segment {
         this.vectors = e.vectors(to - from);
         this.coords = new double[m][];
         for (int k = 0; k < m; k++) {
-            coords[k] = vectors > 0 ? java.util.Arrays.copyOfRange(s, k * tau, k * tau + vectors) : new double[0];
+            int a = from + k * tau;
+            coords[k] = vectors > 0 ? java.util.Arrays.copyOfRange(series, a, a + vectors) : new double[0];
         }
         this.c0 = coords[0];
         this.c1 = m > 1 ? coords[1] : null;
@@ -227,7 +226,7 @@ final class Segment {
     double distance(int i, int j) {
         double acc = 0;
         for (int k = 0; k < m; k++) {
-            double d = s[i + k * tau] - s[j + k * tau];
+            double d = coords[k][i] - coords[k][j];
             if (max) {
                 d = Math.abs(d);
                 acc = d > acc ? d : acc;
