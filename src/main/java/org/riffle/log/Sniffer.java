@@ -122,6 +122,9 @@ final class Sniffer {
         char best = ',';
         double bestFit = 0;
         for (char d : CANDIDATES) {
+            if (!inTail(head, content, d)) {
+                continue; // no line of the second half can split on it: its width would be 1
+            }
             List<List<String>> split = new ArrayList<>();
             for (int i : content) {
                 split.add(Splitter.split(head.get(i), d));
@@ -192,6 +195,22 @@ final class Sniffer {
      * The table's width: the most common number of fields (two or more) in the second half of the lines,
      * ties broken by how common it is among all lines, then by the wider; 1 when no line has two fields.
      */
+    /**
+     * Whether some content line of the second half (the lines {@link #modalWidth} counts) holds the
+     * delimiter: a space or tab for whitespace-aligned columns.
+     */
+    private static boolean inTail(List<String> head, List<Integer> content, char d) {
+        for (int k = content.size() / 2; k < content.size(); k++) {
+            String line = head.get(content.get(k));
+            boolean found = d == Dialect.WHITESPACE ? line.indexOf(' ') >= 0 || line.indexOf('\t') >= 0
+                    : line.indexOf(d) >= 0;
+            if (found) {
+                return true;
+            }
+        }
+        return false;
+    }
+
     static int modalWidth(List<List<String>> split) {
         Map<Integer, Integer> tail = new HashMap<>();
         Map<Integer, Integer> all = new HashMap<>();
