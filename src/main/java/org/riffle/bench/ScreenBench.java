@@ -20,7 +20,9 @@ import org.riffle.tui.Warmup;
  * {@code java -cp target/riffle.jar org.riffle.bench.ScreenBench [LOG]}; {@code riffle bench} runs it in
  * a child JVM through {@link #child}. The screen is drawn on Lanterna's virtual terminal, so the
  * terminal emulator's own drawing time is not included. As {@code riffle LOG} does, it starts the
- * screen's {@link Warmup} before reading the log.
+ * screen's {@link Warmup} before reading the log. {@code riffle bench} takes only the key-press figure
+ * from here: its first frame and analysis times come from the real entry point ({@link RealScreen}),
+ * which also pays the command line, the terminal's set-up and the note desk.
  */
 public final class ScreenBench {
     /** Target for the first frame of the demo log, ms after the JVM's start. */
