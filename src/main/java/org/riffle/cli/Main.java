@@ -4,31 +4,20 @@ import java.io.PrintWriter;
 import java.nio.file.InvalidPathException;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
-import java.util.function.Supplier;
 import org.riffle.log.LogException;
 import org.riffle.log.ReadOptions;
 import picocli.CommandLine;
 
 /** The entry point: builds the command line, runs it, exits with its status. */
 public final class Main {
-    /** The subcommands by name, in the order the help lists them. */
-    private static final Map<String, Supplier<Object>> SUBCOMMANDS = new LinkedHashMap<>();
-
-    static {
-        SUBCOMMANDS.put("channels", ChannelsCommand::new);
-        SUBCOMMANDS.put("spectrum", SpectrumCommand::new);
-        SUBCOMMANDS.put("open", OpenCommand::new);
-        SUBCOMMANDS.put("report", ReportCommand::new);
-        SUBCOMMANDS.put("baseline", BaselineCommand::new);
-        SUBCOMMANDS.put("demo", DemoCommand::new);
-        SUBCOMMANDS.put("rqa", RqaCommand::new);
-        SUBCOMMANDS.put("trend", TrendCommand::new);
-        SUBCOMMANDS.put("health", HealthCommand::new);
-        SUBCOMMANDS.put("bench", BenchCommand::new);
-    }
+    /**
+     * The subcommands' names, in the order the help lists them; {@link #subcommand} makes each. Names
+     * and a switch rather than a map of constructors: linking ten constructor references (and loading
+     * their classes) was a cost on the way to the first frame.
+     */
+    private static final List<String> SUBCOMMANDS = List.of("channels", "spectrum", "open", "report", "baseline",
+            "demo", "rqa", "trend", "health", "bench");
 
     private Main() {
     }
@@ -85,7 +74,7 @@ public final class Main {
      * about half a second (measured on the 2-core bench machine), a second on the way to the first frame.
      */
     static List<Path> plainLogs(String[] args) {
-        if (args.length == 0 || SUBCOMMANDS.containsKey(args[0])) {
+        if (args.length == 0 || SUBCOMMANDS.contains(args[0])) {
             return null;
         }
         List<Path> logs = new ArrayList<>();
@@ -100,6 +89,34 @@ public final class Main {
             }
         }
         return logs;
+    }
+
+    /** A new instance of the subcommand named {@code name}, one of {@link #SUBCOMMANDS}. */
+    private static Object subcommand(String name) {
+        switch (name) {
+            case "channels":
+                return new ChannelsCommand();
+            case "spectrum":
+                return new SpectrumCommand();
+            case "open":
+                return new OpenCommand();
+            case "report":
+                return new ReportCommand();
+            case "baseline":
+                return new BaselineCommand();
+            case "demo":
+                return new DemoCommand();
+            case "rqa":
+                return new RqaCommand();
+            case "trend":
+                return new TrendCommand();
+            case "health":
+                return new HealthCommand();
+            case "bench":
+                return new BenchCommand();
+            default:
+                throw new IllegalArgumentException("no subcommand " + name);
+        }
     }
 
     /** What a failed command prints and returns: one line, never a stack trace unless asked for. */
@@ -131,11 +148,12 @@ public final class Main {
      */
     static CommandLine commandLine(PrintWriter out, PrintWriter err, String[] args) {
         CommandLine cl = new CommandLine(new RiffleCommand());
-        Supplier<Object> only = args.length > 0 ? SUBCOMMANDS.get(args[0]) : null;
-        if (only != null) {
-            cl.addSubcommand(args[0], only.get());
+        if (args.length > 0 && SUBCOMMANDS.contains(args[0])) {
+            cl.addSubcommand(args[0], subcommand(args[0]));
         } else {
-            SUBCOMMANDS.forEach((name, command) -> cl.addSubcommand(name, command.get()));
+            for (String name : SUBCOMMANDS) {
+                cl.addSubcommand(name, subcommand(name));
+            }
         }
         cl.setOut(out);
         cl.setErr(err);
