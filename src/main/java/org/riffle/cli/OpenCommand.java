@@ -6,6 +6,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.CompletionException;
 import java.util.concurrent.Callable;
 import org.riffle.log.LogException;
 import org.riffle.log.LogReader;
@@ -43,6 +44,21 @@ final class OpenCommand implements Callable<Integer> {
         return open(logs, read.toReadOptions(), ascii, spec.commandLine().getErr());
     }
 
+    /** The note desk made on its own thread; its failure as the unchecked exception it was. */
+    private static VisitDesk desk(CompletableFuture<VisitDesk> ready) {
+        try {
+            return ready.join();
+        } catch (CompletionException e) {
+            if (e.getCause() instanceof RuntimeException r) {
+                throw r;
+            }
+            if (e.getCause() instanceof Error err) {
+                throw err;
+            }
+            throw e;
+        }
+    }
+
     /** Opens the screen on {@code logs}; the shared body of {@code riffle open} and {@code riffle LOG}. */
     static int open(List<Path> logs, ReadOptions readOptions, boolean ascii, PrintWriter err)
             throws LogException, IOException {
@@ -74,7 +90,7 @@ final class OpenCommand implements Callable<Integer> {
                 deskReady.thenAccept(VisitDesk::close);
                 throw e;
             }
-            try (VisitDesk desk = deskReady.join()) {
+            try (VisitDesk desk = desk(deskReady)) {
                 TriageScreen.Ending end = TriageScreen.open(tty, recordings, options, desk);
                 return end == TriageScreen.Ending.QUIT ? ExitCode.OK : ExitCode.INTERRUPTED;
             }

@@ -73,9 +73,9 @@ public final class TriageScreen {
                     terminal = t;
                 }
                 startKeyReader(t, this::key);
-            } catch (IOException e) {
+            } catch (IOException | RuntimeException e) {
                 synchronized (lock) {
-                    failure = e;
+                    failure = e instanceof IOException io ? io : new IOException("cannot set up the terminal: " + e, e);
                 }
             }
         }
