@@ -70,8 +70,8 @@ public final class Main {
     /**
      * The logs of a plain {@code riffle LOG [LOG...]}: every argument a path, none an option, an
      * {@code @file} or {@code -} (standard input), the first not a subcommand's name; else null. Such a
-     * command line opens the screen without building the command line parser, which on a cold JVM costs
-     * about half a second (measured on the 2-core bench machine), a second on the way to the first frame.
+     * command line opens the screen without building the command line parser, which on a cold JVM cost
+     * about half a second before the first frame (measured on the 2-core bench machine).
      */
     static List<Path> plainLogs(String[] args) {
         if (args.length == 0 || SUBCOMMANDS.contains(args[0])) {
