@@ -62,7 +62,7 @@ final class OpenCommand implements Callable<Integer> {
     /** Opens the screen on {@code logs}; the shared body of {@code riffle open} and {@code riffle LOG}. */
     static int open(List<Path> logs, ReadOptions readOptions, boolean ascii, PrintWriter err)
             throws LogException, IOException {
-        if (!TriageScreen.hasTerminal()) {
+        if (!ScreenOptions.hasTerminal()) {
             err.println("riffle: no terminal: the screen needs one (over SSH use 'ssh -t'); without one use"
                     + " a headless command such as 'riffle channels LOG'");
             return ExitCode.NO_TERMINAL;

@@ -55,12 +55,11 @@ final class Splitter {
     static List<String> naive(String line, char delimiter) {
         List<String> out = new ArrayList<>();
         int from = 0;
-        for (int i = 0; i <= line.length(); i++) {
-            if (i == line.length() || line.charAt(i) == delimiter) {
-                out.add(line.substring(from, i));
-                from = i + 1;
-            }
+        for (int i = line.indexOf(delimiter); i >= 0; i = line.indexOf(delimiter, from)) {
+            out.add(line.substring(from, i));
+            from = i + 1;
         }
+        out.add(line.substring(from));
         return out;
     }
 

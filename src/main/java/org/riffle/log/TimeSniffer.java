@@ -41,8 +41,8 @@ final class TimeSniffer {
     }
 
     /** Counts over one column's filled cells. */
-    record Stats(int filled, int ymd, int dmy, int mdy, int dateOnly, int tod, int numeric, boolean offset,
-                 String example, long exampleLine) {
+    record Stats(int filled, int ymd, int dmy, int mdy, int dateOnly, int tod, int numeric, String example,
+                 long exampleLine) {
     }
 
     static Choice choose(String file, List<String> header, List<List<String>> data, List<Long> lines, int columns,
@@ -124,7 +124,6 @@ final class TimeSniffer {
         int dateOnly = 0;
         int tod = 0;
         int numeric = 0;
-        boolean offset = false;
         String example = "";
         long exampleLine = 0;
         for (int r = 0; r < data.size(); r++) {
@@ -143,9 +142,8 @@ final class TimeSniffer {
             dateOnly += c.length() <= 10 && DATE_ONLY.matcher(c).matches() ? 1 : 0;
             tod += Stamps.timeOfDay(c) != Stamps.FAIL ? 1 : 0;
             numeric += Numbers.looksNumeric(c) ? 1 : 0;
-            offset |= OFFSET.matcher(c).matches();
         }
-        return new Stats(filled, ymd, dmy, mdy, dateOnly, tod, numeric, offset, example, exampleLine);
+        return new Stats(filled, ymd, dmy, mdy, dateOnly, tod, numeric, example, exampleLine);
     }
 
     static boolean most(int count, int filled) {
@@ -180,11 +178,25 @@ final class TimeSniffer {
                 roles[j] = Layout.DATE;
                 roles[j + 1] = Layout.TIME_OF_DAY;
                 text = "time '" + names[j] + "' + '" + names[j + 1] + "' " + layout;
-                return new Choice(roles, order, 1, true, text + offsetText(next.offset(), notes), notes);
+                return new Choice(roles, order, 1, true, text + offsetText(hasOffset(data, j + 1), notes), notes);
             }
         }
         roles[j] = Layout.STAMP;
-        return new Choice(roles, order, 1, true, text + offsetText(s.offset(), notes), notes);
+        return new Choice(roles, order, 1, true, text + offsetText(hasOffset(data, j), notes), notes);
+    }
+
+    /**
+     * Whether a filled cell of column j ends in a UTC offset or Z; asked only of the column chosen as the
+     * time (the regex is slow on a cold JVM, and every column's cells were once tried).
+     */
+    private static boolean hasOffset(List<List<String>> data, int j) {
+        for (List<String> row : data) {
+            String c = j < row.size() ? row.get(j).strip() : "";
+            if (!Numbers.isMissingToken(c) && OFFSET.matcher(c).matches()) {
+                return true;
+            }
+        }
+        return false;
     }
 
     private static String offsetText(boolean offset, List<String> notes) {

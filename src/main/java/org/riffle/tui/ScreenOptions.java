@@ -19,6 +19,14 @@ public record ScreenOptions(boolean ascii, boolean color, int threads) {
     }
 
     /**
+     * True when standard input and output are both a terminal (the screen needs both). Here rather than
+     * in {@link TriageScreen}, whose loading pulls in the terminal classes before the log is read.
+     */
+    public static boolean hasTerminal() {
+        return System.console() != null;
+    }
+
+    /**
      * Options from the environment: ASCII unless the locale ({@code LC_ALL}, else {@code LC_CTYPE},
      * else {@code LANG}) names UTF-8, or when {@code asciiRequested}; no colour when {@code NO_COLOR}
      * is set to anything non-empty (no-color.org); the analysis on every core (a frame costs a few ms of

@@ -37,10 +37,6 @@ public final class TriageScreen {
     private TriageScreen() {
     }
 
-    /** True when standard input and output are both a terminal (the screen needs both). */
-    public static boolean hasTerminal() {
-        return System.console() != null;
-    }
 
     /**
      * The process's terminal, taken on a thread of its own while the logs are read (setting its modes
