@@ -93,30 +93,19 @@ public final class Main {
 
     /** A new instance of the subcommand named {@code name}, one of {@link #SUBCOMMANDS}. */
     private static Object subcommand(String name) {
-        switch (name) {
-            case "channels":
-                return new ChannelsCommand();
-            case "spectrum":
-                return new SpectrumCommand();
-            case "open":
-                return new OpenCommand();
-            case "report":
-                return new ReportCommand();
-            case "baseline":
-                return new BaselineCommand();
-            case "demo":
-                return new DemoCommand();
-            case "rqa":
-                return new RqaCommand();
-            case "trend":
-                return new TrendCommand();
-            case "health":
-                return new HealthCommand();
-            case "bench":
-                return new BenchCommand();
-            default:
-                throw new IllegalArgumentException("no subcommand " + name);
-        }
+        return switch (name) {
+            case "channels" -> new ChannelsCommand();
+            case "spectrum" -> new SpectrumCommand();
+            case "open" -> new OpenCommand();
+            case "report" -> new ReportCommand();
+            case "baseline" -> new BaselineCommand();
+            case "demo" -> new DemoCommand();
+            case "rqa" -> new RqaCommand();
+            case "trend" -> new TrendCommand();
+            case "health" -> new HealthCommand();
+            case "bench" -> new BenchCommand();
+            default -> throw new IllegalArgumentException("no subcommand " + name);
+        };
     }
 
     /** What a failed command prints and returns: one line, never a stack trace unless asked for. */

@@ -192,10 +192,6 @@ final class Sniffer {
     }
 
     /**
-     * The table's width: the most common number of fields (two or more) in the second half of the lines,
-     * ties broken by how common it is among all lines, then by the wider; 1 when no line has two fields.
-     */
-    /**
      * Whether some content line of the second half (the lines {@link #modalWidth} counts) holds the
      * delimiter: a space or tab for whitespace-aligned columns.
      */
@@ -211,6 +207,10 @@ final class Sniffer {
         return false;
     }
 
+    /**
+     * The table's width: the most common number of fields (two or more) in the second half of the lines,
+     * ties broken by how common it is among all lines, then by the wider; 1 when no line has two fields.
+     */
     static int modalWidth(List<List<String>> split) {
         Map<Integer, Integer> tail = new HashMap<>();
         Map<Integer, Integer> all = new HashMap<>();

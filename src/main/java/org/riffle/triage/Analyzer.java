@@ -134,7 +134,7 @@ public final class Analyzer {
                                      TriageListener listener, Optional<RqaStep.Known> known) {
         listener.progress(i, "judgement", 0.9);
         // vibration figures: filled by the vibration step where the channel is a vibration channel
-        Optional<VibrationFigures> vibration = VibrationStep.figures(c, recording.time().rateHz(), baseline,
+        Optional<VibrationFigures> vibration = VibrationStep.figures(c, x, recording.time().rateHz(), baseline,
                 params.vibration());
         ChannelAssessment a = ChannelWork.assess(c, x, m, bm, baseline, recording.time(), resets, stats,
                 vibration, known);

@@ -33,12 +33,18 @@ final class VibrationStep {
      * vibration unit (velocity, acceleration, displacement) or it is too short for a spectrum.
      */
     static Optional<VibrationFigures> figures(Channel channel, double rateHz, Baseline baseline, VibrationParams p) {
+        return figures(channel, null, rateHz, baseline, p);
+    }
+
+    /** As the other {@code figures}, with the samples as doubles already made ({@code samples}, or null). */
+    static Optional<VibrationFigures> figures(Channel channel, double[] samples, double rateHz, Baseline baseline,
+                                              VibrationParams p) {
         Unit unit = Unit.parse(channel.unit());
         Quantity q = unit.quantity();
         if (q != Quantity.VELOCITY && q != Quantity.ACCELERATION && q != Quantity.DISPLACEMENT) {
             return Optional.empty();
         }
-        double[] x = channel.toDoubles();
+        double[] x = samples != null ? samples : channel.toDoubles();
         if (x.length < Vibration.MIN_SAMPLES) {
             return Optional.empty();
         }

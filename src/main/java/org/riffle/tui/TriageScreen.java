@@ -97,18 +97,27 @@ public final class TriageScreen {
             to.accept(k);
         }
 
-        /** The terminal, once taken; keys go to {@code to} from now on (those typed before first). */
-        UnixTerminal open(Consumer<KeyStroke> to) throws IOException, InterruptedException {
+        /** The terminal, once taken (waits for it). */
+        UnixTerminal terminal() throws IOException, InterruptedException {
             taker.join();
             synchronized (lock) {
                 if (failure != null) {
                     throw failure;
                 }
+                return terminal;
+            }
+        }
+
+        /**
+         * Hands the terminal to the screen: keys go to {@code to} from now on, those typed before first,
+         * and restoring the terminal is the screen's job.
+         */
+        void handOver(Consumer<KeyStroke> to) {
+            synchronized (lock) {
                 opened = true;
                 early.forEach(to);
                 early.clear();
                 keys = to;
-                return terminal;
             }
         }
 
@@ -156,23 +165,10 @@ public final class TriageScreen {
      */
     public static Ending open(Tty tty, List<Recording> recordings, ScreenOptions options, NoteDesk desk)
             throws IOException, InterruptedException {
-        List<KeyStroke> pending = new ArrayList<>();
-        ScreenLoop[] ready = new ScreenLoop[1];
-        UnixTerminal terminal = tty.open(k -> {
-            synchronized (pending) {
-                if (ready[0] == null) {
-                    pending.add(k);
-                    return;
-                }
-            }
-            ready[0].post(new Event.Key(k));
-        });
+        UnixTerminal terminal = tty.terminal();
         TerminalScreen screen = new TerminalScreen(terminal);
         ScreenLoop loop = new ScreenLoop(screen, recordings, options, desk);
-        synchronized (pending) {
-            pending.forEach(k -> loop.post(new Event.Key(k)));
-            ready[0] = loop;
-        }
+        tty.handOver(k -> loop.post(new Event.Key(k)));
         FrameLog.fromEnvironment(System.getenv()).ifPresent(log -> loop.onFrame(keys -> log.frame(loop.settled())));
         try {
             screen.startScreen();
