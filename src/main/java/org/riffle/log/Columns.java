@@ -64,11 +64,14 @@ final class Columns {
         return true;
     }
 
-    /** Counts a text cell in column {@code j} and remembers it while fewer than the cap are known. */
+    /**
+     * Counts a text cell in column {@code j} and remembers it while fewer than the cap are known;
+     * {@code null} counts a repeat of a cell already offered.
+     */
     void text(int j, String cell) {
         textCells[j]++;
         Set<String> d = distinct.get(j);
-        if (d.size() < DISTINCT_CAP) {
+        if (cell != null && d.size() < DISTINCT_CAP) {
             d.add(cell);
         }
     }

@@ -2,6 +2,7 @@ package org.riffle.log;
 
 import java.io.IOException;
 import java.nio.charset.Charset;
+import java.util.Arrays;
 
 /**
  * The one streaming pass over the rows of a delimited log. A line without a double quote is split at
@@ -51,6 +52,9 @@ final class TablePass {
     private String badTimeText;
     /** The decoded text of the row the general path is splitting. */
     private String generalText = "";
+    /** Per column, the bytes of its last text cell (a state column repeats a few words) and their verdict. */
+    private final byte[][] lastText;
+    private final boolean[] lastTextMissing;
 
     /**
      * A pass that keeps every row while at most {@code rowCap} fit, then reduces ({@link Reducer}) to
@@ -77,6 +81,8 @@ final class TablePass {
             stored[j] = roles[j] == Layout.VALUE;
         }
         this.cols = new Columns(stored, layout.hasTime(), Math.min(capacity, rowCap));
+        this.lastText = new byte[ncols][];
+        this.lastTextMissing = new boolean[ncols];
     }
 
     /** The columns the pass stores (those with numbers), ascending. */
@@ -242,9 +248,24 @@ final class TablePass {
         }
     }
 
+    /**
+     * A cell of a value column that is not a number: counted as text unless it is a missing-value
+     * token. A cell with the same bytes as the column's last text cell has the same verdict and adds
+     * nothing new to the distinct words, so it is only counted (no decoding, on every row of a state column).
+     */
     private void nonNumeric(int j, byte[] b, int s, int e) {
+        byte[] last = lastText[j];
+        if (last != null && Arrays.equals(last, 0, last.length, b, s, e)) {
+            if (!lastTextMissing[j]) {
+                cols.text(j, null);
+            }
+            return;
+        }
         String t = new String(b, s, e - s, charset).strip();
-        if (!Numbers.isMissingToken(t)) {
+        boolean missing = Numbers.isMissingToken(t);
+        lastText[j] = Arrays.copyOfRange(b, s, e);
+        lastTextMissing[j] = missing;
+        if (!missing) {
             cols.text(j, t);
         }
     }
