@@ -52,7 +52,7 @@ final class TextReader {
             throw new LogException(src.name, 0, 0, "empty file (only a UTF-8 byte-order mark)");
         }
         List<String> lines = headLines(src.name, head, enc.bomLength(), cs, whole,
-                opt.charset().isPresent() && cs.equals(StandardCharsets.UTF_8));
+                opt.charset().isPresent() && cs.equals(StandardCharsets.UTF_8), opt.skipRows().orElse(0));
         if (lines.isEmpty() && !whole) {
             throw new LogException(src.name, 1, 0, "line 1 is longer than " + LineReader.MAX_LINE
                     + " bytes: not a delimited text log (binary data, or no line breaks?)");
@@ -64,7 +64,7 @@ final class TextReader {
         long blockBytes = (long) blocks * values * Blocks.BYTES_PER_BLOCK;
         int rowCap = MemoryBudget.rowCap(budget, blockBytes, values, Columns.MAX_ROWS);
         int keep = MemoryBudget.keepCap(budget, blockBytes, values, rowCap);
-        TablePass pass = new TablePass(src.name, layout, cs, capacity(src, head, lines.size(), whole), allGeneral,
+        TablePass pass = new TablePass(src.name, layout, cs, capacity(src, head, whole), allGeneral,
                 rowCap, keep, blocks);
         InputStream body = new SequenceInputStream(
                 new ByteArrayInputStream(head, enc.bomLength(), head.length - enc.bomLength()), src.in);
@@ -95,10 +95,19 @@ final class TextReader {
                 : "cannot read" + where + ": " + e.getMessage());
     }
 
-    /** The complete lines of the head, decoded; checks them when UTF-8 was asked for. */
-    private static List<String> headLines(String file, byte[] head, int from, Charset cs, boolean whole,
-                                          boolean strictUtf8) throws LogException {
+    /**
+     * The complete lines of the head, decoded, as far as the sniffer looks: to the end of the
+     * {@link Sniffer#MAX_LINES}-th content line from line {@code skip + 1} on, counted as
+     * {@link Sniffer#joinQuoted} counts (a quoted field spanning lines makes one line). When UTF-8 was
+     * asked for, every complete line of the head is checked.
+     */
+    static List<String> headLines(String file, byte[] head, int from, Charset cs, boolean whole,
+                                  boolean strictUtf8, int skip) throws LogException {
         List<String> out = new ArrayList<>();
+        int content = 0;
+        boolean inQuotes = false;
+        boolean enough = false;
+        long lineNo = 0;
         int s = from;
         for (int i = from; i <= head.length; i++) {
             boolean last = i == head.length;
@@ -107,15 +116,26 @@ final class TextReader {
             }
             if (last || head[i] == '\n') {
                 int e = i > s && head[i - 1] == '\r' ? i - 1 : i;
+                lineNo++;
                 if (strictUtf8) {
                     int bad = Encodings.firstBadUtf8(head, s, e);
                     if (bad >= 0) {
                         long column = new String(head, s, bad - s, cs).length() + 1;
-                        throw new LogException(file, out.size() + 1, column, "byte " + Encodings.hex(head[bad])
+                        throw new LogException(file, lineNo, column, "byte " + Encodings.hex(head[bad])
                                 + " is not valid UTF-8; try --encoding windows-1252");
                     }
+                } else if (enough) {
+                    break;
                 }
-                out.add(new String(head, s, e - s, cs));
+                if (!enough) {
+                    String line = new String(head, s, e - s, cs);
+                    if (!inQuotes && out.size() >= skip && !Sniffer.isBlankOrComment(line)) {
+                        content++;
+                    }
+                    inQuotes ^= (Splitter.quotes(line) & 1) == 1;
+                    out.add(line);
+                    enough = content >= Sniffer.MAX_LINES && !inQuotes;
+                }
                 s = i + 1;
             }
         }
@@ -123,7 +143,8 @@ final class TextReader {
     }
 
     /** Rows to allocate at first: from the file size and the head's bytes per line, else a small start. */
-    private static int capacity(Source src, byte[] head, int headLines, boolean whole) {
+    private static int capacity(Source src, byte[] head, boolean whole) {
+        int headLines = newlines(head);
         if (whole) {
             return headLines + 1;
         }
