@@ -116,15 +116,19 @@ final class Sniffer {
      * The candidate delimiter that fits the lines best: the number of lines it splits into the table's
      * width, times the share of number, time or missing-value cells among those lines in the second half
      * of the head (the data, past any preamble and header). The share keeps dates and times, which hold
-     * spaces, from making whitespace look like a delimiter.
+     * spaces, from making whitespace look like a delimiter. When only one candidate occurs in the second
+     * half, any fit above zero chooses it, so its cells are looked at only until the first value.
      */
     static char chooseDelimiter(List<String> head, List<Integer> content) {
+        List<Character> present = new ArrayList<>();
+        for (char d : CANDIDATES) {
+            if (inTail(head, content, d)) {
+                present.add(d); // else no line of the second half can split on it: its width would be 1
+            }
+        }
         char best = ',';
         double bestFit = 0;
-        for (char d : CANDIDATES) {
-            if (!inTail(head, content, d)) {
-                continue; // no line of the second half can split on it: its width would be 1
-            }
+        for (char d : present) {
             List<List<String>> split = new ArrayList<>();
             for (int i : content) {
                 split.add(Splitter.split(head.get(i), d));
@@ -132,6 +136,11 @@ final class Sniffer {
             int k = modalWidth(split);
             if (k < 2) {
                 continue;
+            }
+            if (present.size() == 1) {
+                bestFit = anyValueInTail(split, k) ? 1 : 0;
+                best = d;
+                break;
             }
             int lines = 0;
             int cells = 0;
@@ -158,6 +167,21 @@ final class Sniffer {
             return decimalCommaSeen(head, content) ? ';' : ',';
         }
         return best;
+    }
+
+    /** True when a line of {@code k} fields in the second half holds a value-like cell. */
+    private static boolean anyValueInTail(List<List<String>> split, int k) {
+        for (int i = split.size() / 2; i < split.size(); i++) {
+            List<String> f = split.get(i);
+            if (f.size() == k) {
+                for (String c : f) {
+                    if (ColumnSniffer.valueLike(c)) {
+                        return true;
+                    }
+                }
+            }
+        }
+        return false;
     }
 
     private static final Pattern DECIMAL_COMMA = Pattern.compile(".*\\d,\\d.*");
