@@ -161,16 +161,21 @@ final class TablePass {
         }
     }
 
+    /** Splits at the delimiter; one call of {@link #cell} in the loop keeps the JIT's inlined copy single. */
     private void fastRow(byte[] b, int s, int e) throws LogException {
         byte d = delim;
         int from = s;
-        for (int i = s; i < e; i++) {
-            if (b[i] == d) {
-                cell(b, from, i);
-                from = i + 1;
+        while (true) {
+            int i = from;
+            while (i < e && b[i] != d) {
+                i++;
             }
+            cell(b, from, i);
+            if (i == e) {
+                return;
+            }
+            from = i + 1;
         }
-        cell(b, from, e);
     }
 
     private void fastWhitespaceRow(byte[] b, int s, int e) throws LogException {
@@ -261,6 +266,11 @@ final class TablePass {
             }
             return;
         }
+        newText(j, b, s, e);
+    }
+
+    /** A text cell unlike the column's last one: decoded and judged (kept apart from the hot path above). */
+    private void newText(int j, byte[] b, int s, int e) {
         String t = new String(b, s, e - s, charset).strip();
         boolean missing = Numbers.isMissingToken(t);
         lastText[j] = Arrays.copyOfRange(b, s, e);
