@@ -45,7 +45,7 @@ public final class ScreenBench {
     public static ScreenProbe.Timings measure(Path log, PrintWriter out) throws Exception {
         long start = ManagementFactory.getRuntimeMXBean().getStartTime();
         long entered = System.currentTimeMillis();
-        Warmup.start();
+        Warmup.start(false);
         Recording r = LogReader.read(log, ReadOptions.defaults());
         long read = System.currentTimeMillis();
         ScreenProbe.Timings t = ScreenProbe.run(List.of(r), 200, 60, 40, 25);

@@ -67,8 +67,8 @@ final class OpenCommand implements Callable<Integer> {
                     + " a headless command such as 'riffle channels LOG'");
             return ExitCode.NO_TERMINAL;
         }
-        Warmup.start();
         ScreenOptions options = ScreenOptions.fromEnvironment(System.getenv(), ascii);
+        Warmup.start(options.ascii());
         // the terminal and the note desk are made ready on threads of their own while the logs are read
         CompletableFuture<VisitDesk> deskReady = new CompletableFuture<>();
         Thread deskMaker = new Thread(() -> {

@@ -151,7 +151,12 @@ public final class TriageScreen {
      * @param ascii true to draw with ASCII only ({@link ScreenOptions#ascii()})
      */
     public static Tty take(boolean ascii) {
-        return new Tty(ascii ? StandardCharsets.US_ASCII : StandardCharsets.UTF_8);
+        return new Tty(charset(ascii));
+    }
+
+    /** The terminal's character set for a screen drawn in ASCII or UTF-8. */
+    static Charset charset(boolean ascii) {
+        return ascii ? StandardCharsets.US_ASCII : StandardCharsets.UTF_8;
     }
 
     /**
