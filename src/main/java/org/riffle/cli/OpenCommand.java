@@ -5,8 +5,6 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.concurrent.CompletableFuture;
-import java.util.concurrent.CompletionException;
 import java.util.concurrent.Callable;
 import org.riffle.log.LogException;
 import org.riffle.log.LogReader;
@@ -44,21 +42,6 @@ final class OpenCommand implements Callable<Integer> {
         return open(logs, read.toReadOptions(), ascii, spec.commandLine().getErr());
     }
 
-    /** The note desk made on its own thread; its failure as the unchecked exception it was. */
-    private static VisitDesk desk(CompletableFuture<VisitDesk> ready) {
-        try {
-            return ready.join();
-        } catch (CompletionException e) {
-            if (e.getCause() instanceof RuntimeException r) {
-                throw r;
-            }
-            if (e.getCause() instanceof Error err) {
-                throw err;
-            }
-            throw e;
-        }
-    }
-
     /** Opens the screen on {@code logs}; the shared body of {@code riffle open} and {@code riffle LOG}. */
     static int open(List<Path> logs, ReadOptions readOptions, boolean ascii, PrintWriter err)
             throws LogException, IOException {
@@ -69,31 +52,16 @@ final class OpenCommand implements Callable<Integer> {
         }
         ScreenOptions options = ScreenOptions.fromEnvironment(System.getenv(), ascii);
         Warmup.start(options.ascii());
-        // the terminal and the note desk are made ready on threads of their own while the logs are read
-        CompletableFuture<VisitDesk> deskReady = new CompletableFuture<>();
-        Thread deskMaker = new Thread(() -> {
-            try {
-                deskReady.complete(VisitDesk.forLogs(logs, options.ascii()));
-            } catch (RuntimeException | Error e) {
-                deskReady.completeExceptionally(e);
-            }
-        }, "riffle-desk");
-        deskMaker.setDaemon(true);
-        deskMaker.start();
+        // the terminal is made ready on a thread of its own while the logs are read; the note desk once
+        // the first frame is out (it took CPU from reading on a 2-core machine)
         try (TriageScreen.Tty tty = TriageScreen.take(options.ascii())) {
             List<Recording> recordings = new ArrayList<>();
-            try {
-                for (Path p : logs) {
-                    recordings.add(LogReader.read(p, readOptions));
-                }
-            } catch (LogException | RuntimeException e) {
-                deskReady.thenAccept(VisitDesk::close);
-                throw e;
+            for (Path p : logs) {
+                recordings.add(LogReader.read(p, readOptions));
             }
-            try (VisitDesk desk = desk(deskReady)) {
-                TriageScreen.Ending end = TriageScreen.open(tty, recordings, options, desk);
-                return end == TriageScreen.Ending.QUIT ? ExitCode.OK : ExitCode.INTERRUPTED;
-            }
+            TriageScreen.Ending end = TriageScreen.open(tty, recordings, options,
+                    () -> VisitDesk.forLogs(logs, options.ascii()));
+            return end == TriageScreen.Ending.QUIT ? ExitCode.OK : ExitCode.INTERRUPTED;
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
             return ExitCode.INTERRUPTED;

@@ -35,7 +35,7 @@ final class Controller {
     private Outcome outcome = Outcome.RUNNING;
     private boolean quitAfterSave;
     private boolean saveWhenDone;
-    private final Optional<Findings> earlier;
+    private Optional<Findings> earlier = Optional.empty();
     private MachineFacts appliedMachine = MachineFacts.none();
     /** Set when the next frame must be sent whole. */
     boolean fullRedraw;
@@ -48,10 +48,21 @@ final class Controller {
         this.io = io;
         this.works = new AnalysisWork[s.sources.size()];
         this.nav = new Navigation(s);
-        this.earlier = desk.restorable().filter(f -> !f.isEmpty());
+        offerDraft();
+    }
+
+    /** Offers the desk's draft of an earlier session, if it has one (at the start, before any key). */
+    private void offerDraft() {
+        earlier = desk.restorable().filter(f -> !f.isEmpty());
         if (earlier.isPresent()) {
             s.mode = ScreenState.Mode.ASK_DRAFT;
         }
+    }
+
+    /** The desk made after the first frame is ready (keys were held until now): its draft, or its problem. */
+    void deskReady(Optional<String> problem) {
+        offerDraft();
+        problem.ifPresent(p -> s.message = p);
     }
 
     Outcome outcome() {
@@ -130,9 +141,14 @@ final class Controller {
         s.ticks++;
     }
 
+    /** Ctrl-C, or the end of input (a hang-up): the screen ends, keeping the draft. */
+    static boolean interrupts(KeyStroke k) {
+        return k.getKeyType() == KeyType.Character && k.isCtrlDown() && k.getCharacter() == 'c'
+                || k.getKeyType() == KeyType.EOF;
+    }
+
     private void key(KeyStroke k) {
-        if (k.getKeyType() == KeyType.Character && k.isCtrlDown() && k.getCharacter() == 'c'
-                || k.getKeyType() == KeyType.EOF) {
+        if (interrupts(k)) {
             interrupt();
             return;
         }

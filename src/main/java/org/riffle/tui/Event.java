@@ -18,6 +18,10 @@ sealed interface Event {
     record Resized() implements Event {
     }
 
+    /** The note desk, made after the first frame, is ready (or failed; see {@link LateDesk}). */
+    record DeskReady() implements Event {
+    }
+
     /** Time passed (drives the draft autosave and the busy marker). */
     record Tick() implements Event {
     }

@@ -41,8 +41,27 @@ final class ScreenLoop {
     /** Progress applied but not drawn yet. */
     private boolean behind;
     private LongConsumer onFrame = k -> { };
+    /** The desk made after the first frame; null when the desk was ready from the start. */
+    private final LateDesk late;
+    /** Keys that came while the late desk was being made, in order. */
+    private final List<Event> held = new ArrayList<>();
+    private boolean deskArrived;
 
     ScreenLoop(Screen screen, List<Recording> recordings, ScreenOptions options, NoteDesk desk) {
+        this(screen, recordings, options, desk, null);
+    }
+
+    /**
+     * A loop whose note desk is made after the first frame is drawn; keys wait for it (Ctrl-C and
+     * hang-up do not), so the draft of an earlier session is still offered before any key acts.
+     */
+    static ScreenLoop withLateDesk(Screen screen, List<Recording> recordings, ScreenOptions options, LateDesk desk) {
+        return new ScreenLoop(screen, recordings, options, desk, desk);
+    }
+
+    private ScreenLoop(Screen screen, List<Recording> recordings, ScreenOptions options, NoteDesk desk,
+                       LateDesk late) {
+        this.late = late;
         List<Source> sources = new ArrayList<>();
         for (Recording r : recordings) {
             sources.add(new Source(r, new TriageParams(-1, -1, options.threads())));
@@ -54,6 +73,11 @@ final class ScreenLoop {
         });
         this.renderer = new Renderer(screen, options);
         this.controller = new Controller(new ScreenState(sources), options, desk, this::post, io);
+    }
+
+    /** Whether the late desk's event has been applied (always false without a late desk). */
+    boolean deskArrived() {
+        return deskArrived;
     }
 
     /** Queues an event for the UI thread. Thread-safe. */
@@ -71,15 +95,23 @@ final class ScreenLoop {
         this.onFrame = callback;
     }
 
-    /** Draws the first frame, starts the analysis, and serves events until the screen ends. */
+    /** Starts the screen ({@link #start}) and serves events until it ends. */
     Controller.Outcome run() throws IOException, InterruptedException {
-        renderer.render(controller, true);
-        onFrame.accept(keysHandled);
-        controller.startAll();
+        start();
         while (controller.outcome() == Controller.Outcome.RUNNING) {
             step(TICK_NANOS);
         }
         return controller.outcome();
+    }
+
+    /** Draws the first frame, then starts making the late desk (if any) and the analysis. */
+    void start() throws IOException {
+        renderer.render(controller, true);
+        onFrame.accept(keysHandled);
+        if (late != null) {
+            late.start(() -> post(new Event.DeskReady()));
+        }
+        controller.startAll();
     }
 
     /** Draws the current state. */
@@ -121,7 +153,19 @@ final class ScreenLoop {
     }
 
     private void apply(Event e) {
-        if (e instanceof Event.Key) {
+        if (e instanceof Event.DeskReady) {
+            deskArrived = true;
+            controller.deskReady(late.problem());
+            List<Event> keys = List.copyOf(held);
+            held.clear();
+            keys.forEach(this::apply);
+            return;
+        }
+        if (e instanceof Event.Key k) {
+            if (late != null && !deskArrived && !Controller.interrupts(k.stroke())) {
+                held.add(e);
+                return;
+            }
             keysHandled++;
         }
         controller.dispatch(e);

@@ -10,6 +10,7 @@ import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.function.Consumer;
+import java.util.function.Supplier;
 import org.riffle.log.Recording;
 
 /**
@@ -165,14 +166,16 @@ public final class TriageScreen {
      * @param tty the terminal, from {@link #take} with the same ASCII choice as {@code options}
      * @param recordings the logs, in the order named
      * @param options drawing options (see {@link ScreenOptions#fromEnvironment})
-     * @param desk where notes and drafts go
+     * @param desk makes the desk where notes and drafts go; called on a thread of its own once the first
+     *     frame is out (see {@link LateDesk}), and the desk is closed when the screen ends
      * @throws IOException when the terminal cannot be driven
      */
-    public static Ending open(Tty tty, List<Recording> recordings, ScreenOptions options, NoteDesk desk)
-            throws IOException, InterruptedException {
+    public static Ending open(Tty tty, List<Recording> recordings, ScreenOptions options,
+                              Supplier<? extends NoteDesk> desk) throws IOException, InterruptedException {
         UnixTerminal terminal = tty.terminal();
         TerminalScreen screen = new TerminalScreen(terminal);
-        ScreenLoop loop = new ScreenLoop(screen, recordings, options, desk);
+        LateDesk late = new LateDesk(desk);
+        ScreenLoop loop = ScreenLoop.withLateDesk(screen, recordings, options, late);
         tty.handOver(k -> loop.post(new Event.Key(k)));
         FrameLog.fromEnvironment(System.getenv()).ifPresent(log -> loop.onFrame(keys -> log.frame(loop.settled())));
         try {
@@ -185,7 +188,11 @@ public final class TriageScreen {
             try {
                 screen.stopScreen();
             } finally {
-                terminal.close();
+                try {
+                    terminal.close();
+                } finally {
+                    late.close();
+                }
             }
         }
     }
