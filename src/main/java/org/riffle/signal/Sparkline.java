@@ -2,7 +2,6 @@ package org.riffle.signal;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.function.IntToDoubleFunction;
 
 /**
  * A channel drawn as a row (or rows) of text cells. The samples are split into {@code width}
@@ -26,24 +25,25 @@ public final class Sparkline {
 
     /** One row of {@code width} cells for {@code x}. */
     public static String render(double[] x, int width, boolean unicode) {
-        return render(i -> x[i], x.length, width, 1, unicode).get(0);
+        return render(x, width, 1, unicode).get(0);
     }
 
     /** One row of {@code width} cells for {@code x}. */
     public static String render(float[] x, int width, boolean unicode) {
-        return render(i -> x[i], x.length, width, 1, unicode).get(0);
+        double[] d = new double[x.length];
+        for (int i = 0; i < x.length; i++) {
+            d[i] = x[i];
+        }
+        return render(d, width, unicode);
     }
 
-    /**
-     * {@code rows} rows of {@code width} cells, top row first, for the {@code n} samples that
-     * {@code sample} returns for 0..n−1.
-     */
-    public static List<String> render(IntToDoubleFunction sample, int n, int width, int rows, boolean unicode) {
-        if (width < 1 || rows < 1 || n < 0) {
-            throw new IllegalArgumentException("sparkline of " + n + " samples in " + width + " cells × "
-                    + rows + " rows: need width ≥ 1, rows ≥ 1, samples ≥ 0");
+    /** {@code rows} rows of {@code width} cells, top row first, for the samples {@code x}. */
+    public static List<String> render(double[] x, int width, int rows, boolean unicode) {
+        if (width < 1 || rows < 1) {
+            throw new IllegalArgumentException("sparkline of " + x.length + " samples in " + width + " cells × "
+                    + rows + " rows: need width ≥ 1, rows ≥ 1");
         }
-        return ranges(sample, sample, n, width, rows, unicode);
+        return ranges(x, x, width, rows, unicode);
     }
 
     /**
@@ -59,17 +59,18 @@ public final class Sparkline {
             throw new IllegalArgumentException("sparkline of " + n + " minima and " + max.length + " maxima in "
                     + width + " cells: need width ≥ 1 and one maximum per minimum");
         }
-        return ranges(i -> min[i], i -> max[i], n, width, 1, unicode).get(0);
+        return ranges(min, max, width, 1, unicode).get(0);
     }
 
     /**
-     * {@code rows} rows of {@code width} cells for {@code n} consecutive runs of samples known by their
-     * ranges [low(i), high(i)] (a single sample is a run whose range is itself): cell c stands for runs
-     * [⌊c·n/w⌋, ⌊(c+1)·n/w⌋), at least one, and the range of their union; a run with a bound that is
-     * not finite is skipped.
+     * {@code rows} rows of {@code width} cells for the {@code n = low.length} consecutive runs of samples
+     * known by their ranges [low[i], high[i]] (a single sample is a run whose range is itself, both
+     * arrays the same): cell c stands for runs [⌊c·n/w⌋, ⌊(c+1)·n/w⌋), at least one, and the range of
+     * their union; a run with a bound that is not finite is skipped. The loop calls no method: the
+     * screen's first frame runs it before the JIT has compiled it.
      */
-    private static List<String> ranges(IntToDoubleFunction low, IntToDoubleFunction high, int n, int width,
-                                       int rows, boolean unicode) {
+    private static List<String> ranges(double[] low, double[] high, int width, int rows, boolean unicode) {
+        int n = low.length;
         double lo = Double.POSITIVE_INFINITY;
         double hi = Double.NEGATIVE_INFINITY;
         double[] cellMin = new double[width];
@@ -80,11 +81,11 @@ public final class Sparkline {
             int from = (int) ((long) c * n / width);
             int to = Math.max((int) ((long) (c + 1) * n / width), Math.min(n, from + 1));
             for (int i = from; i < to; i++) {
-                double a = low.applyAsDouble(i);
-                double b = high.applyAsDouble(i);
-                if (Double.isFinite(a) && Double.isFinite(b)) {
-                    mn = Math.min(mn, a);
-                    mx = Math.max(mx, b);
+                double a = low[i];
+                double b = high[i];
+                if (a - a == 0 && b - b == 0) { // both finite: x − x is NaN for NaN and ±∞
+                    mn = a < mn ? a : mn;
+                    mx = b > mx ? b : mx;
                 }
             }
             cellMin[c] = mn;

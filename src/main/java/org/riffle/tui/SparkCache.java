@@ -32,7 +32,7 @@ final class SparkCache {
     String line(ScreenState.Row row, Channel ch, Optional<BlockStats> blocks, int width, boolean unicode) {
         String key = row.source() + ":" + row.channel() + ":" + width + ":" + unicode;
         return lines.computeIfAbsent(key, k -> blocks.map(b -> Sparkline.renderRanges(b.minima(), b.maxima(),
-                width, unicode)).orElseGet(() -> Sparkline.render(ch::value, ch.size(), width, 1, unicode).get(0)));
+                width, unicode)).orElseGet(() -> Sparkline.render(ch.toDoubles(), width, unicode)));
     }
 
     /** The trace of samples {@code [from, to)} of {@code ch} in {@code width} × {@code height} cells. */
@@ -42,7 +42,7 @@ final class SparkCache {
             double[] x = new double[to - from];
             ch.copyTo(x, from, to);
             Summary sum = Summary.of(x);
-            trace = new Trace(Sparkline.render(i -> x[i], x.length, width, height, unicode), sum.min(), sum.max());
+            trace = new Trace(Sparkline.render(x, width, height, unicode), sum.min(), sum.max());
             traceKey = key;
         }
         return trace;
