@@ -24,6 +24,8 @@ final class Numbers {
     static final Set<String> MISSING = Set.of("", "NAN", "-NAN", "#N/A", "N/A", "NA", "#NV", "---", "--", "-",
             "ERR", "ERROR", "OVF", "OVER", "UNDER", "UNF", "NULL", "NONE", "INF", "-INF", "+INF", "INFINITY",
             "-INFINITY", "#VALUE!", "#DIV/0!", "#NUM!", "#REF!", "?", "*");
+    /** The longest missing-value token: a longer cell (a date, a word) is none, without upper-casing it. */
+    private static final int LONGEST_MISSING = longest(MISSING);
 
     private static final float[] FLOAT_POW10 = {1e0f, 1e1f, 1e2f, 1e3f, 1e4f, 1e5f, 1e6f, 1e7f, 1e8f, 1e9f, 1e10f};
     private static final double[] DOUBLE_POW10 = {1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11,
@@ -180,7 +182,16 @@ final class Numbers {
 
     /** True when the cell is a known "no value" token (empty, NaN, #N/A, ---, ERR, OVF ...). */
     static boolean isMissingToken(String cell) {
-        return MISSING.contains(cell.strip().toUpperCase(Locale.ROOT));
+        String t = cell.strip();
+        return t.length() <= LONGEST_MISSING && MISSING.contains(t.toUpperCase(Locale.ROOT));
+    }
+
+    private static int longest(Set<String> words) {
+        int n = 0;
+        for (String w : words) {
+            n = Math.max(n, w.length());
+        }
+        return n;
     }
 
     /** True when {@code text} reads as a number in either decimal mark. */

@@ -35,7 +35,7 @@ final class TextReader {
         try {
             head = src.in.readNBytes(HEAD);
             whole = head.length < HEAD;
-            while (!whole && head.length < MAX_HEAD && newlines(head) < HEAD_LINES) {
+            while (!whole && head.length < MAX_HEAD && newlines(head, HEAD_LINES) < HEAD_LINES) {
                 int want = Math.min(MAX_HEAD, 2 * head.length) - head.length;
                 byte[] more = src.in.readNBytes(want);
                 whole = more.length < want;
@@ -81,10 +81,11 @@ final class TextReader {
         return Assembler.build(src, layout, pass, cs, opt, budget);
     }
 
-    private static int newlines(byte[] b) {
+    /** The number of line feeds in {@code b}, counted up to {@code atMost}. */
+    private static int newlines(byte[] b, int atMost) {
         int n = 0;
-        for (byte x : b) {
-            n += x == '\n' ? 1 : 0;
+        for (int i = 0; i < b.length && n < atMost; i++) {
+            n += b[i] == '\n' ? 1 : 0;
         }
         return n;
     }
@@ -144,7 +145,7 @@ final class TextReader {
 
     /** Rows to allocate at first: from the file size and the head's bytes per line, else a small start. */
     private static int capacity(Source src, byte[] head, boolean whole) {
-        int headLines = newlines(head);
+        int headLines = newlines(head, Integer.MAX_VALUE);
         if (whole) {
             return headLines + 1;
         }
