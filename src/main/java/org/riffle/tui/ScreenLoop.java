@@ -106,12 +106,17 @@ final class ScreenLoop {
 
     /** Draws the first frame, then starts making the late desk (if any) and the analysis. */
     void start() throws IOException {
-        renderer.render(controller, true);
+        drawFirstFrame();
         onFrame.accept(keysHandled);
         if (late != null) {
             late.start(() -> post(new Event.DeskReady()));
         }
         controller.startAll();
+    }
+
+    /** Draws the first frame: the whole screen is sent. */
+    void drawFirstFrame() throws IOException {
+        renderer.render(controller, true);
     }
 
     /** Draws the current state. */

@@ -8,6 +8,7 @@ import java.io.FileOutputStream;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.nio.charset.Charset;
+import java.nio.charset.StandardCharsets;
 
 /**
  * The process's text terminal: Lanterna's {@link UnixTerminal} on standard input and output, with two
@@ -17,6 +18,7 @@ import java.nio.charset.Charset;
  *     every write, and Lanterna writes a character at a time, so a 200 × 60 frame was thousands of
  *     system calls (and, over SSH, as many small packets); it is now a few. Lanterna asks the terminal
  *     for the cursor position (to learn its size) without flushing, so that query goes out at once.</li>
+ * <li>Characters are turned into bytes directly ({@link CellBytes}), not through an encoder each.</li>
  * <li>The terminal modes are set with one {@code stty} run instead of four (each run is a process,
  *     tens of milliseconds on a slow machine): no canonical input, reads of one byte, no echo, and no
  *     interrupt character (Ctrl-C arrives as a key, which the screen handles). They are undone, with
@@ -25,8 +27,18 @@ import java.nio.charset.Charset;
  * Confined to the screen's threads as Lanterna's terminal is.
  */
 final class TtyTerminal extends UnixTerminal {
+    private final boolean utf8;
+
     TtyTerminal(Charset charset) throws IOException {
         super(System.in, new Output(new FileOutputStream(FileDescriptor.out)), charset, CtrlCBehaviour.TRAP);
+        this.utf8 = charset.equals(StandardCharsets.UTF_8);
+    }
+
+    /** A character's bytes without an encoder per character (see {@link CellBytes}). */
+    @Override
+    protected byte[] translateCharacter(char c) {
+        byte[] b = CellBytes.of(c, utf8);
+        return b != null ? b : super.translateCharacter(c);
     }
 
     @Override

@@ -6,6 +6,7 @@ import com.googlecode.lanterna.terminal.ansi.ANSITerminal;
 import java.io.InputStream;
 import java.io.OutputStream;
 import java.nio.charset.Charset;
+import java.nio.charset.StandardCharsets;
 import java.util.List;
 import java.util.Map;
 import org.riffle.log.Channel;
@@ -49,7 +50,7 @@ public final class Warmup {
             screen.startScreen();
             ScreenLoop loop = new ScreenLoop(screen, List.of(r), ScreenOptions.fromEnvironment(
                     Map.of("LANG", "C.UTF-8"), ascii), new ScreenProbe.NoDesk());
-            loop.render();
+            loop.drawFirstFrame();
             loop.close();
         } catch (Exception | LinkageError e) {
             // a warm-up that fails costs nothing but the time it saved; the real screen reports its own errors
@@ -62,10 +63,19 @@ public final class Warmup {
      */
     static final class DryTerminal extends ANSITerminal {
         private final TerminalSize size;
+        private final boolean utf8;
 
         DryTerminal(Charset charset, TerminalSize size) {
             super(InputStream.nullInputStream(), new TtyTerminal.Output(OutputStream.nullOutputStream()), charset);
             this.size = size;
+            this.utf8 = charset.equals(StandardCharsets.UTF_8);
+        }
+
+        /** As {@link TtyTerminal} does. */
+        @Override
+        protected byte[] translateCharacter(char c) {
+            byte[] b = CellBytes.of(c, utf8);
+            return b != null ? b : super.translateCharacter(c);
         }
 
         /** The fixed size: there is no terminal to ask. */
