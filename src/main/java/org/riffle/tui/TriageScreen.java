@@ -66,6 +66,7 @@ public final class TriageScreen {
         private void take(Charset charset) {
             try {
                 UnixTerminal t = new TtyTerminal(charset);
+                t.getTerminalSize(); // asked now, while the log is read, and kept (see TtyTerminal)
                 synchronized (lock) {
                     terminal = t;
                 }

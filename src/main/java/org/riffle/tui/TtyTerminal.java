@@ -1,5 +1,6 @@
 package org.riffle.tui;
 
+import com.googlecode.lanterna.TerminalSize;
 import com.googlecode.lanterna.terminal.ansi.UnixLikeTerminal.CtrlCBehaviour;
 import com.googlecode.lanterna.terminal.ansi.UnixTerminal;
 import java.io.BufferedOutputStream;
@@ -9,6 +10,7 @@ import java.io.IOException;
 import java.io.OutputStream;
 import java.nio.charset.Charset;
 import java.nio.charset.StandardCharsets;
+import java.util.concurrent.atomic.AtomicInteger;
 
 /**
  * The process's text terminal: Lanterna's {@link UnixTerminal} on standard input and output, with two
@@ -18,6 +20,8 @@ import java.nio.charset.StandardCharsets;
  *     every write, and Lanterna writes a character at a time, so a 200 × 60 frame was thousands of
  *     system calls (and, over SSH, as many small packets); it is now a few. Lanterna asks the terminal
  *     for the cursor position (to learn its size) without flushing, so that query goes out at once.</li>
+ * <li>The size is asked once and kept until the terminal signals a resize, and the screen asks it
+ *     while the log is read (see {@link TriageScreen#take}).</li>
  * <li>Characters are turned into bytes directly ({@link CellBytes}), not through an encoder each.</li>
  * <li>The terminal modes are set with one {@code stty} run instead of four (each run is a process,
  *     tens of milliseconds on a slow machine): no canonical input, reads of one byte, no echo, and no
@@ -28,10 +32,42 @@ import java.nio.charset.StandardCharsets;
  */
 final class TtyTerminal extends UnixTerminal {
     private final boolean utf8;
+    /** The size the terminal last reported, until it signals a resize; null when it must be asked. */
+    private volatile TerminalSize known;
+    /** Counts resize signals, so that an answer to a question asked before one is not kept. */
+    private final AtomicInteger resizes = new AtomicInteger();
 
     TtyTerminal(Charset charset) throws IOException {
         super(System.in, new Output(new FileOutputStream(FileDescriptor.out)), charset, CtrlCBehaviour.TRAP);
         this.utf8 = charset.equals(StandardCharsets.UTF_8);
+    }
+
+    /**
+     * The terminal's size: asked once (a round trip to the terminal, over SSH a network one) and kept
+     * until the terminal signals a resize. Lanterna asks on every call, twice before a first frame.
+     */
+    @Override
+    protected TerminalSize findTerminalSize() throws IOException {
+        TerminalSize k = known;
+        if (k != null) {
+            return k;
+        }
+        int before = resizes.get();
+        TerminalSize asked = super.findTerminalSize();
+        if (resizes.get() == before) {
+            known = asked;
+        }
+        return asked;
+    }
+
+    /** Forgets the kept size when the terminal signals a resize, then lets Lanterna ask again. */
+    @Override
+    protected void registerTerminalResizeListener(Runnable onResize) throws IOException {
+        super.registerTerminalResizeListener(() -> {
+            resizes.incrementAndGet();
+            known = null;
+            onResize.run();
+        });
     }
 
     /** A character's bytes without an encoder per character (see {@link CellBytes}). */

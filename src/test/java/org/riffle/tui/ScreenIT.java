@@ -194,4 +194,26 @@ class ScreenIT {
             assertEquals(before, Files.readString(dir.resolve("stty-after.txt")).strip(), "stty settings restored");
         }
     }
+
+    /**
+     * The real terminal's size is kept between frames (asking it is a round trip to the terminal), so
+     * a resize must still reach the screen: the window shrinks and grows, and each time the screen is
+     * drawn again for the new size (its bottom line moves to the new last row, the caution stays on top).
+     */
+    @Test
+    void theScreenFollowsResizesOfTheRealTerminal() throws Exception {
+        try (Tmux t = Tmux.start(dir, script(), 120, 40)) {
+            String pane = analysed(t);
+            String bottom = pane.lines().skip(39).findFirst().orElse("").strip();
+            assertFalse(bottom.isEmpty(), "no bottom line at 120 x 40:\n" + pane);
+            int[][] sizes = {{90, 30}, {130, 45}};
+            for (int[] size : sizes) {
+                t.run("resize-window", "-t", t.session(), "-x", String.valueOf(size[0]), "-y", String.valueOf(size[1]));
+                int last = size[1] - 1;
+                String caution = Chrome.caution(size[0]); // its short or long form, as the width allows
+                t.waitFor(p -> p.startsWith(caution) && p.lines().skip(last).findFirst().orElse("").strip().equals(bottom),
+                        20, "the caution on top and the bottom line on row " + last + " at " + size[0] + " x " + size[1]);
+            }
+        }
+    }
 }

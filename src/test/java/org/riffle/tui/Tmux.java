@@ -31,6 +31,11 @@ final class Tmux implements AutoCloseable {
         return t;
     }
 
+    /** The session's name, for tmux commands that take a target. */
+    String session() {
+        return session;
+    }
+
     /** True when tmux can be run here. */
     static boolean available() {
         try {
