@@ -163,7 +163,12 @@ final class ScreenLoop {
             controller.deskReady(late.problem());
             List<Event> keys = List.copyOf(held);
             held.clear();
-            keys.forEach(this::apply);
+            for (Event k : keys) {
+                if (controller.outcome() != Controller.Outcome.RUNNING) {
+                    break; // as in step: no key acts after one that ended the screen
+                }
+                apply(k);
+            }
             return;
         }
         if (e instanceof Event.Key k) {

@@ -1,6 +1,7 @@
 package org.riffle.tui;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNull;
 
 import com.googlecode.lanterna.TerminalSize;
 import com.googlecode.lanterna.input.KeyStroke;
@@ -117,6 +118,17 @@ class LateDeskTest {
         assertEquals(earlier, loop.controller.s.remarks.entries(), "the draft was offered, then 'r' restored it");
         assertEquals(1, loop.controller.s.selected, "then 'j' moved down");
         assertEquals(earlier, desk.latest, "the desk has the restored entries as its draft");
+    }
+
+    @Test
+    void noHeldKeyActsAfterOneThatEndedTheScreen() throws Exception {
+        open(heldBack(new VirtualScreen.RecordingDesk()));
+        press(new KeyStroke('q', false, false)); // nothing typed: quits at once
+        press(new KeyStroke('C', false, false)); // would open the general comment
+        release.countDown();
+        waitForDesk();
+        assertEquals(Controller.Outcome.QUIT, loop.controller.outcome());
+        assertNull(loop.controller.s.prompt, "the key after the quit was not applied");
     }
 
     @Test
