@@ -75,10 +75,10 @@ final class LineScan {
         this.prev = new long[words];
     }
 
-    /** Adds this band's thumbnail marks to {@code into}. */
-    void orInto(PlotMarks into) {
+    /** Adds this band's thumbnail counts to {@code into}. */
+    void addInto(PlotMarks into) {
         if (plot != null) {
-            into.or(plot);
+            into.add(plot);
         }
     }
 
@@ -193,7 +193,7 @@ final class LineScan {
         }
     }
 
-    /** Sets the thumbnail marks of row i's recurrent cells. */
+    /** Counts row i's recurrent cells in the thumbnail. */
     private void mark(int i) {
         for (int k = (i + w) >>> 6; k < words; k++) {
             for (long c = cur[k]; c != 0; c &= c - 1) {

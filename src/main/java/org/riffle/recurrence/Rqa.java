@@ -86,7 +86,7 @@ public final class Rqa {
         Segment seg = new Segment(series, from, to, params.embedding(), params.norm());
         PlotMarks marks = new PlotMarks(width, height, seg.vectors());
         measure(seg, params, radius, Optional.empty(), threads, marks);
-        return new RecurrencePlot(width, height, marks.cells, radius);
+        return new RecurrencePlot(width, height, marks.counts, seg.vectors(), params.theiler(), radius);
     }
 
     /**
@@ -161,7 +161,7 @@ public final class Rqa {
         List<LineScan> scans = Parallel.run(nThreads, jobs);
         if (marks != null) {
             for (LineScan s : scans) {
-                s.orInto(marks);
+                s.addInto(marks);
             }
         }
         return LineMerge.of(scans, seg.vectors());

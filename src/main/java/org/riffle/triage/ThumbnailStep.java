@@ -67,14 +67,16 @@ final class ThumbnailStep {
             }
             try {
                 RecurrencePlot rp = new Rqa(1).plot(x, from, to, p, radius, SIZE, SIZE);
-                boolean[] cells = new boolean[SIZE * SIZE];
+                int[] recurrences = new int[SIZE * SIZE];
+                int[] pairs = new int[SIZE * SIZE];
                 for (int y = 0; y < SIZE; y++) {
                     for (int c = 0; c < SIZE; c++) {
-                        cells[y * SIZE + c] = rp.at(c, y);
+                        recurrences[y * SIZE + c] = rp.recurrences(c, y);
+                        pairs[y * SIZE + c] = rp.pairs(c, y);
                     }
                 }
                 return Optional.of(new Thumbnail(span, from, to, time.seconds(from), time.seconds(to - 1),
-                        radius, SIZE, SIZE, cells));
+                        radius, SIZE, SIZE, recurrences, pairs));
             } catch (IllegalArgumentException e) {
                 return Optional.empty();
             }

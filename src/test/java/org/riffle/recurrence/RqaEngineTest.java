@@ -94,6 +94,23 @@ class RqaEngineTest {
                     assertEquals(want[yy][xx], plot.at(xx, yy), "cell " + xx + "," + yy);
                 }
             }
+            // the counts too: recurrences and the pairs outside the Theiler band (|i − j| ≥ 3), per cell
+            int[][] recurrences = new int[size[1]][size[0]];
+            int[][] pairs = new int[size[1]][size[0]];
+            for (int i = 0; i < bf.n; i++) {
+                for (int j = 0; j < bf.n; j++) {
+                    if (Math.abs(i - j) >= 3) {
+                        pairs[i * size[1] / bf.n][j * size[0] / bf.n]++;
+                        recurrences[i * size[1] / bf.n][j * size[0] / bf.n] += bf.r[i][j] ? 1 : 0;
+                    }
+                }
+            }
+            for (int yy = 0; yy < size[1]; yy++) {
+                for (int xx = 0; xx < size[0]; xx++) {
+                    assertEquals(recurrences[yy][xx], plot.recurrences(xx, yy), "recurrences of " + xx + "," + yy);
+                    assertEquals(pairs[yy][xx], plot.pairs(xx, yy), "pairs of " + xx + "," + yy);
+                }
+            }
         }
     }
 

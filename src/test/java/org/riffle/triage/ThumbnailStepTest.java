@@ -47,16 +47,34 @@ class ThumbnailStepTest {
     }
 
     /**
-     * The analytic grid: cell (x, y) of a {@code w} × {@code h} grid over {@code n} vectors is set when some
-     * pair i, j = i ± k·P (k ≥ 1) has ⌊j·w/n⌋ = x and ⌊i·h/n⌋ = y.
+     * The analytic grid: cell (x, y) of a {@code w} × {@code h} grid over {@code n} vectors holds the
+     * recurrent pairs i, j = i ± k·P (k ≥ 1) with ⌊j·w/n⌋ = x and ⌊i·h/n⌋ = y, and every pair i ≠ j with
+     * those cells (the Theiler window 1 leaves out i = j); it is set when it holds a recurrence and its
+     * share of recurrent pairs is at least the whole grid's (the display rule of {@link Thumbnail}).
      */
     static boolean[][] expected(int n, int w, int h) {
-        boolean[][] cell = new boolean[w][h];
+        long[][] rec = new long[w][h];
+        long[][] pairs = new long[w][h];
+        long allRec = 0;
         for (int i = 0; i < n; i++) {
-            for (int j = i % P; j < n; j += P) {
-                if (j != i) {
-                    cell[(int) ((long) j * w / n)][(int) ((long) i * h / n)] = true;
+            for (int j = 0; j < n; j++) {
+                if (j == i) {
+                    continue;
                 }
+                int x = (int) ((long) j * w / n);
+                int y = (int) ((long) i * h / n);
+                pairs[x][y]++;
+                if ((j - i) % P == 0) {
+                    rec[x][y]++;
+                    allRec++;
+                }
+            }
+        }
+        long allPairs = (long) n * n - n;
+        boolean[][] cell = new boolean[w][h];
+        for (int x = 0; x < w; x++) {
+            for (int y = 0; y < h; y++) {
+                cell[x][y] = rec[x][y] > 0 && rec[x][y] * allPairs >= allRec * pairs[x][y];
             }
         }
         return cell;
@@ -99,7 +117,9 @@ class ThumbnailStepTest {
         }
         Thumbnail t = sine.thumbnails().get(1);
         // by hand, 950 vectors, 59.4 per cell: cells (x, y) with |x − y| ≤ 2 hold offsets |j − i| < 3 · 59.4 =
-        // 178 only, so no multiple of 200 but 0 (left out): clear; cell (3, 0) holds i = 0, j = 200: set
+        // 178 only, so no multiple of 200 but 0 (left out): clear. The whole grid: 2·(750 + 550 + 350 + 150)
+        // = 3,600 recurrences of 950² − 950 pairs, a rate of 0.0040; cell (3, 0) holds i in [0, 60) and j in
+        // [179, 238), 60 · 59 pairs, of which the 38 with j = i + 200 recur, 0.0107: set
         for (int y = 0; y < 16; y++) {
             for (int x = Math.max(0, y - 2); x <= Math.min(15, y + 2); x++) {
                 assertFalse(t.at(x, y), "near-diagonal cell " + x + "," + y);

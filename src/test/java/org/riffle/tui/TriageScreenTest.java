@@ -133,8 +133,9 @@ class TriageScreenTest {
 
     /**
      * The thumbnail panel shows both of the channel's thumbnails, cell for cell: each plot line, between
-     * its bars, against the 16 × 16 grid read directly (the oracle merges the cells each character
-     * stands for: 1 × 2 at full size, 2 × 4 when halved; half blocks in UTF-8 split the vertical pair).
+     * its bars, against the 16 × 16 grid's counts read directly (the oracle adds up the cells each
+     * character stands for: 1 × 2 at full size, 2 × 4 when halved; half blocks in UTF-8 split the
+     * vertical pair).
      */
     static void assertThumbnailsDrawn(VirtualScreen v, ChannelAssessment a, boolean ascii) {
         List<Thumbnail> th = a.thumbnails();
@@ -162,9 +163,11 @@ class TriageScreenTest {
                 assertTrue(cells.startsWith(bar) && cells.endsWith(bar), "frame: " + line);
                 for (int c = 0; c < side; c++) {
                     int yTop = 15 - r * fy;
-                    boolean up = any(th.get(k), c * fx, fx, yTop - fy / 2 + 1, fy / 2);
-                    boolean down = any(th.get(k), c * fx, fx, yTop - fy + 1, fy / 2);
-                    char want = ascii ? (up || down ? '#' : '.') : up && down ? '█' : up ? '▀' : down ? '▄' : ' ';
+                    boolean up = dense(th.get(k), c * fx, fx, yTop - fy / 2 + 1, fy / 2);
+                    boolean down = dense(th.get(k), c * fx, fx, yTop - fy + 1, fy / 2);
+                    // an ASCII character stands for the whole block, a half block for each half
+                    boolean whole = dense(th.get(k), c * fx, fx, yTop - fy + 1, fy);
+                    char want = ascii ? (whole ? '#' : '.') : up && down ? '█' : up ? '▀' : down ? '▄' : ' ';
                     assertEquals(want, cells.charAt(1 + c), "thumbnail " + k + " line " + r + " cell " + c + ":\n"
                             + text);
                 }
@@ -172,14 +175,26 @@ class TriageScreenTest {
         }
     }
 
-    private static boolean any(Thumbnail t, int x0, int nx, int y0, int ny) {
-        boolean set = false;
-        for (int x = x0; x < x0 + nx; x++) {
-            for (int y = y0; y < y0 + ny; y++) {
-                set |= t.at(x, y);
+    /**
+     * Whether the block of fine cells a character stands for is set: it holds a recurrence and its share
+     * of recurrent pairs is at least the whole grid's (the rule of {@link Thumbnail}, from its counts).
+     */
+    private static boolean dense(Thumbnail t, int x0, int nx, int y0, int ny) {
+        long r = 0;
+        long q = 0;
+        long allR = 0;
+        long allQ = 0;
+        for (int x = 0; x < t.width(); x++) {
+            for (int y = 0; y < t.height(); y++) {
+                allR += t.recurrences(x, y);
+                allQ += t.pairs(x, y);
+                if (x >= x0 && x < x0 + nx && y >= y0 && y < y0 + ny) {
+                    r += t.recurrences(x, y);
+                    q += t.pairs(x, y);
+                }
             }
         }
-        return set;
+        return r > 0 && r * allQ >= allR * q;
     }
 
     @Test
