@@ -36,14 +36,14 @@ final class Assembler {
         TimeBase time;
         List<TimeIssue> issues = List.of();
         if (layout.hasTime()) {
-            TimeAudit.Result audit = TimeAudit.audit(cols.seconds, pass.rowLines, red == null ? -1 : red.head());
+            TimeAudit.Result audit = TimeAudit.audit(cols.seconds, rows, pass.rowLines, red == null ? -1 : red.head());
             warnings.addAll(audit.notes());
             issues = audit.issues();
             long first = pass.firstNanos();
             Instant origin = layout.absoluteTime() && first != Stamps.FAIL
                     ? Instant.ofEpochSecond(Math.floorDiv(first, Stamps.NANOS_PER_SECOND),
                     Math.floorMod(first, Stamps.NANOS_PER_SECOND)) : null;
-            time = TimeBase.adoptExplicit(cols.seconds, audit.rateHz(), origin);
+            time = TimeBase.adoptExplicit(cols.seconds, rows, audit.rateHz(), origin);
             if (opt.sampleRateHz().isPresent()) {
                 warnings.add("--rate ignored: the log has a time column (give --time-column none to use --rate)");
             }
@@ -64,13 +64,13 @@ final class Assembler {
             }
             k++;
             BlockStats b = red == null ? null : red.blocks().snapshot(k, layout.names()[j]);
-            long present = b != null ? b.count() : rows - missing(v);
+            long present = b != null ? b.count() : rows - missing(v, rows);
             int text = cols.textCells(j);
             String name = layout.names()[j];
             if (text > present) {
                 texts.add(new TextChannel(name, cols.distinct(j)));
             } else {
-                channels.add(Channel.adopt(name, layout.units()[j], v));
+                channels.add(Channel.adopt(name, layout.units()[j], v, rows));
                 if (b != null) {
                     blocks.add(b);
                 }
@@ -91,10 +91,10 @@ final class Assembler {
         return new Recording(facts, time, channels, texts, issues);
     }
 
-    private static int missing(float[] v) {
+    private static int missing(float[] v, int rows) {
         int missing = 0;
-        for (float x : v) {
-            missing += x != x ? 1 : 0;
+        for (int i = 0; i < rows; i++) {
+            missing += v[i] != v[i] ? 1 : 0;
         }
         return missing;
     }
@@ -106,7 +106,7 @@ final class Assembler {
             long logRow = i < red.head() ? i : red.tailFrom() + (i - red.head());
             at[i] = regular.isIndexed() ? logRow : logRow / regular.rateHz();
         }
-        return regular.isIndexed() ? TimeBase.adoptIndexed(at) : TimeBase.adoptExplicit(at, regular.rateHz(), null);
+        return regular.isIndexed() ? TimeBase.adoptIndexed(at) : TimeBase.adoptExplicit(at, at.length, regular.rateHz(), null);
     }
 
     private static TimeBase untimed(int rows, Layout layout, ReadOptions opt, List<String> warnings) {

@@ -1,5 +1,6 @@
 package org.riffle.log;
 
+import java.util.Arrays;
 import java.util.Objects;
 
 /**
@@ -7,12 +8,14 @@ import java.util.Objects;
  * primitive {@code float} array (4 bytes a sample). A missing sample is {@code NaN}.
  *
  * <p>Immutable: the samples are copied in, and {@link #values()} hands out a copy; hot loops use
- * {@link #value(int)} or {@link #copyTo(double[], int, int)}.
+ * {@link #value(int)} or {@link #copyTo(double[], int, int)}. A channel made by a reader may own an
+ * array longer than its samples (the rows were allocated from an estimate); the rest is never read.
  */
 public final class Channel {
     private final String name;
     private final String unit;
     private final float[] samples;
+    private final int size;
     private final int missing;
 
     /**
@@ -21,26 +24,33 @@ public final class Channel {
      * @param samples samples; {@code NaN} marks a missing one. Copied.
      */
     public Channel(String name, String unit, float[] samples) {
-        this(name, unit, samples.clone(), null);
+        this(name, unit, samples.clone(), samples.length);
     }
 
-    /** Takes ownership of {@code owned}; the unused last parameter only tells this constructor apart. */
-    private Channel(String name, String unit, float[] owned, Void adopted) {
+    /** Takes ownership of {@code owned}, of which the first {@code size} are the samples. */
+    private Channel(String name, String unit, float[] owned, int size) {
         this.name = Objects.requireNonNull(name, "name");
         this.unit = Objects.requireNonNull(unit, "unit");
+        if (size < 0 || size > owned.length) {
+            throw new IllegalArgumentException(size + " samples of an array of " + owned.length);
+        }
         this.samples = owned;
+        this.size = size;
         int m = 0;
-        for (float v : owned) {
-            if (Float.isNaN(v)) {
+        for (int i = 0; i < size; i++) {
+            if (Float.isNaN(owned[i])) {
                 m++;
             }
         }
         this.missing = m;
     }
 
-    /** Builds a channel that takes ownership of {@code samples} without copying (readers only). */
-    static Channel adopt(String name, String unit, float[] samples) {
-        return new Channel(name, unit, samples, null);
+    /**
+     * Builds a channel of the first {@code size} values of {@code samples}, taking ownership of the array
+     * without copying it (readers only).
+     */
+    static Channel adopt(String name, String unit, float[] samples, int size) {
+        return new Channel(name, unit, samples, size);
     }
 
     public String name() {
@@ -53,7 +63,7 @@ public final class Channel {
 
     /** Number of samples, missing ones included. */
     public int size() {
-        return samples.length;
+        return size;
     }
 
     /** Number of missing ({@code NaN}) samples. */
@@ -63,23 +73,47 @@ public final class Channel {
 
     /** Sample {@code i}, {@code NaN} when missing. */
     public float value(int i) {
-        return samples[i];
+        return samples[Objects.checkIndex(i, size)];
     }
 
     /** A copy of all samples. */
     public float[] values() {
-        return samples.clone();
+        return Arrays.copyOf(samples, size);
     }
 
     /** The samples as doubles (a new array). */
     public double[] toDoubles() {
-        double[] out = new double[samples.length];
-        copyTo(out, 0, samples.length);
+        double[] out = new double[size];
+        copyTo(out, 0, size);
         return out;
+    }
+
+    /**
+     * For each run k, the smallest and largest present sample of [from[k], to[k]) into min[k] and
+     * max[k], or +∞ and −∞ when the run has none (the shape of {@code Sparkline.Runs}): a channel's
+     * sparkline without a copy of its samples, which for a long log was megabytes of fresh memory on
+     * the way to the first frame.
+     */
+    public void ranges(int[] from, int[] to, double[] min, double[] max) {
+        for (int k = 0; k < from.length; k++) {
+            Objects.checkFromToIndex(from[k], to[k], size);
+            float mn = Float.POSITIVE_INFINITY;
+            float mx = Float.NEGATIVE_INFINITY;
+            for (int i = from[k]; i < to[k]; i++) {
+                float v = samples[i];
+                if (v - v == 0) { // finite: v − v is NaN for NaN and ±∞
+                    mn = v < mn ? v : mn;
+                    mx = v > mx ? v : mx;
+                }
+            }
+            min[k] = mn;
+            max[k] = mx;
+        }
     }
 
     /** Copies samples {@code [from, to)} into {@code dest} starting at 0. */
     public void copyTo(double[] dest, int from, int to) {
+        Objects.checkFromToIndex(from, to, size);
         for (int i = from; i < to; i++) {
             dest[i - from] = samples[i];
         }
@@ -87,7 +121,7 @@ public final class Channel {
 
     @Override
     public String toString() {
-        return "Channel[" + name + (unit.isEmpty() ? "" : " [" + unit + "]") + ", " + samples.length
+        return "Channel[" + name + (unit.isEmpty() ? "" : " [" + unit + "]") + ", " + size
                 + " samples, " + missing + " missing]";
     }
 }

@@ -104,14 +104,22 @@ final class Columns {
         capacity = n;
     }
 
-    /** Cuts every array to {@link #rows}. */
+    /**
+     * Cuts every array to {@link #rows} when more than a sixteenth of it is unused (the rows grew past
+     * the first estimate); a smaller slack, the usual one of an estimate from the file's size, is kept,
+     * since the copy is tens of megabytes of fresh memory for a long log (the channels and the time base
+     * hold the row count). Every array is {@code capacity} long.
+     */
     void trim() {
+        if (capacity - rows <= rows / 16) {
+            return;
+        }
         for (int j = 0; j < values.length; j++) {
-            if (values[j] != null && values[j].length != rows) {
+            if (values[j] != null) {
                 values[j] = Arrays.copyOf(values[j], rows);
             }
         }
-        if (seconds != null && seconds.length != rows) {
+        if (seconds != null) {
             seconds = Arrays.copyOf(seconds, rows);
         }
         capacity = rows;

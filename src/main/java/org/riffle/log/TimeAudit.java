@@ -29,16 +29,16 @@ final class TimeAudit {
     }
 
     static Result audit(double[] t, RowLines lines) {
-        return audit(t, lines, -1);
+        return audit(t, t.length, lines, -1);
     }
 
     /**
-     * As {@link #audit(double[], RowLines)}, leaving out the step into row {@code join} (where a reduced
+     * As {@link #audit(double[], RowLines)} for the first {@code n} times of {@code t}, leaving out the
+     * step into row {@code join} (where a reduced
      * log's two windows meet; -1 for none): it is no step of the clock.
      */
-    static Result audit(double[] t, RowLines lines, int join) {
+    static Result audit(double[] t, int n, RowLines lines, int join) {
         List<String> notes = new ArrayList<>();
-        int n = t.length;
         if (n < 2) {
             notes.add("only " + n + " row: the sample rate cannot be inferred (1 Hz shown)");
             return new Result(1, Double.NaN, List.of(), notes);
@@ -53,18 +53,18 @@ final class TimeAudit {
         }
         if (positive == 0) {
             notes.add("no time step is positive: the sample rate cannot be inferred (1 Hz shown)");
-            return new Result(1, Double.NaN, issues(t, lines, Double.POSITIVE_INFINITY, join, notes), notes);
+            return new Result(1, Double.NaN, issues(t, n, lines, Double.POSITIVE_INFINITY, join, notes), notes);
         }
         double median = median(steps, positive);
-        List<TimeIssue> issues = issues(t, lines, GAP_FACTOR * median, join, notes);
+        List<TimeIssue> issues = issues(t, n, lines, GAP_FACTOR * median, join, notes);
         return new Result(1 / median, median, issues, notes);
     }
 
-    private static List<TimeIssue> issues(double[] t, RowLines lines, double gapAbove, int join,
+    private static List<TimeIssue> issues(double[] t, int n, RowLines lines, double gapAbove, int join,
                                           List<String> notes) {
         List<TimeIssue> out = new ArrayList<>();
         int[] count = new int[TimeIssue.Kind.values().length];
-        for (int i = 1; i < t.length; i++) {
+        for (int i = 1; i < n; i++) {
             if (i == join) {
                 continue;
             }

@@ -54,9 +54,15 @@ public final class TimeBase {
         return new TimeBase(null, numbers, numbers.length, 1.0, true);
     }
 
-    /** As {@link #explicit} but takes ownership of the array (readers only). */
-    static TimeBase adoptExplicit(double[] seconds, double rateHz, Instant origin) {
-        return new TimeBase(origin, seconds, seconds.length, rateHz, false);
+    /**
+     * As {@link #explicit} for the first {@code size} times of {@code seconds}, taking ownership of the
+     * array (readers only; the rest of it is never read).
+     */
+    static TimeBase adoptExplicit(double[] seconds, int size, double rateHz, Instant origin) {
+        if (size < 0 || size > seconds.length) {
+            throw new IllegalArgumentException(size + " rows of " + seconds.length + " times");
+        }
+        return new TimeBase(origin, seconds, size, rateHz, false);
     }
 
     /** Number of rows. */

@@ -139,7 +139,7 @@ final class WavReader {
         List<Channel> channels = new ArrayList<>();
         for (int c = 0; c < f.channels(); c++) {
             float[] v = data.channel(c, scale);
-            channels.add(Channel.adopt("ch" + (c + 1), unit, v));
+            channels.add(Channel.adopt("ch" + (c + 1), unit, v, v.length));
         }
         SourceFacts facts = new SourceFacts(src.name, src.sizeBytes, f.describe() + (src.gzipped ? ", gzip" : ""),
                 "", List.of(), warnings);
@@ -192,7 +192,7 @@ final class WavReader {
         List<Channel> channels = new ArrayList<>();
         List<BlockStats> stats = new ArrayList<>();
         for (int c = 0; c < f.channels(); c++) {
-            channels.add(Channel.adopt("ch" + (c + 1), unit, kept[c]));
+            channels.add(Channel.adopt("ch" + (c + 1), unit, kept[c], kept[c].length));
             stats.add(blocks.snapshot(c, "ch" + (c + 1)));
         }
         double[] at = new double[plan.keep()];
@@ -203,7 +203,7 @@ final class WavReader {
                 MemoryBudget.wholeHeap(total, f.channels()), MemoryBudget.heap(), head, tailFrom, stats);
         SourceFacts facts = new SourceFacts(src.name, src.sizeBytes, f.describe(), "", List.of(), List.of(),
                 Optional.empty(), Optional.of(reduction));
-        return new Recording(facts, TimeBase.adoptExplicit(at, f.rate(), null), channels, List.of(), List.of());
+        return new Recording(facts, TimeBase.adoptExplicit(at, at.length, f.rate(), null), channels, List.of(), List.of());
     }
 
     /** A cursor over the RIFF stream that reports broken headers by file. */

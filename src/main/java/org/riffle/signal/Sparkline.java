@@ -23,27 +23,38 @@ public final class Sparkline {
     private Sparkline() {
     }
 
+    /**
+     * Measures runs of samples: for each run k, the smallest and largest finite sample of
+     * [from[k], to[k]) into min[k] and max[k], or +∞ and −∞ when the run has none. A source that holds
+     * its samples (a log's channel) answers without copying them.
+     */
+    @FunctionalInterface
+    public interface Runs {
+        void ranges(int[] from, int[] to, double[] min, double[] max);
+    }
+
     /** One row of {@code width} cells for {@code x}. */
     public static String render(double[] x, int width, boolean unicode) {
         return render(x, width, 1, unicode).get(0);
     }
 
-    /** One row of {@code width} cells for {@code x}. */
-    public static String render(float[] x, int width, boolean unicode) {
-        double[] d = new double[x.length];
-        for (int i = 0; i < x.length; i++) {
-            d[i] = x[i];
-        }
-        return render(d, width, unicode);
+    /** One row of {@code width} cells for the {@code n} samples that {@code samples} measures. */
+    public static String render(Runs samples, int n, int width, boolean unicode) {
+        check(n, width, 1);
+        return cells(samples, n, width, 1, unicode).get(0);
     }
 
     /** {@code rows} rows of {@code width} cells, top row first, for the samples {@code x}. */
     public static List<String> render(double[] x, int width, int rows, boolean unicode) {
+        check(x.length, width, rows);
+        return cells((from, to, min, max) -> ranges(x, x, from, to, min, max), x.length, width, rows, unicode);
+    }
+
+    private static void check(int n, int width, int rows) {
         if (width < 1 || rows < 1) {
-            throw new IllegalArgumentException("sparkline of " + x.length + " samples in " + width + " cells × "
+            throw new IllegalArgumentException("sparkline of " + n + " samples in " + width + " cells × "
                     + rows + " rows: need width ≥ 1, rows ≥ 1");
         }
-        return ranges(x, x, width, rows, unicode);
     }
 
     /**
@@ -59,28 +70,43 @@ public final class Sparkline {
             throw new IllegalArgumentException("sparkline of " + n + " minima and " + max.length + " maxima in "
                     + width + " cells: need width ≥ 1 and one maximum per minimum");
         }
-        return ranges(min, max, width, 1, unicode).get(0);
+        return cells((from, to, lo, hi) -> ranges(min, max, from, to, lo, hi), n, width, 1, unicode).get(0);
     }
 
     /**
-     * {@code rows} rows of {@code width} cells for the {@code n = low.length} consecutive runs of samples
-     * known by their ranges [low[i], high[i]] (a single sample is a run whose range is itself, both
-     * arrays the same): cell c stands for runs [⌊c·n/w⌋, ⌊(c+1)·n/w⌋), at least one, and the range of
-     * their union; a run with a bound that is not finite is skipped. The loop calls no method: the
-     * screen's first frame runs it before the JIT has compiled it.
+     * {@code rows} rows of {@code width} cells for {@code n} consecutive runs (a single sample is a run
+     * whose range is itself): cell c stands for runs [⌊c·n/w⌋, ⌊(c+1)·n/w⌋), at least one, and the range
+     * of their union, as {@code runs} measures it.
      */
-    private static List<String> ranges(double[] low, double[] high, int width, int rows, boolean unicode) {
-        int n = low.length;
-        double lo = Double.POSITIVE_INFINITY;
-        double hi = Double.NEGATIVE_INFINITY;
+    private static List<String> cells(Runs runs, int n, int width, int rows, boolean unicode) {
+        int[] from = new int[width];
+        int[] to = new int[width];
+        for (int c = 0; c < width; c++) {
+            from[c] = (int) ((long) c * n / width);
+            to[c] = Math.max((int) ((long) (c + 1) * n / width), Math.min(n, from[c] + 1));
+        }
         double[] cellMin = new double[width];
         double[] cellMax = new double[width];
+        runs.ranges(from, to, cellMin, cellMax);
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
         for (int c = 0; c < width; c++) {
+            lo = Math.min(lo, cellMin[c]);
+            hi = Math.max(hi, cellMax[c]);
+        }
+        return draw(cellMin, cellMax, lo, hi, width, rows, unicode);
+    }
+
+    /**
+     * {@link Runs} over runs known by their ranges [low[i], high[i]] (single samples: both arrays the
+     * same); a run with a bound that is not finite is skipped. The loop calls no method: the screen's
+     * first frame runs it before the JIT has compiled it.
+     */
+    private static void ranges(double[] low, double[] high, int[] from, int[] to, double[] min, double[] max) {
+        for (int c = 0; c < from.length; c++) {
             double mn = Double.POSITIVE_INFINITY;
             double mx = Double.NEGATIVE_INFINITY;
-            int from = (int) ((long) c * n / width);
-            int to = Math.max((int) ((long) (c + 1) * n / width), Math.min(n, from + 1));
-            for (int i = from; i < to; i++) {
+            for (int i = from[c]; i < to[c]; i++) {
                 double a = low[i];
                 double b = high[i];
                 if (a - a == 0 && b - b == 0) { // both finite: x − x is NaN for NaN and ±∞
@@ -88,12 +114,9 @@ public final class Sparkline {
                     mx = b > mx ? b : mx;
                 }
             }
-            cellMin[c] = mn;
-            cellMax[c] = mx;
-            lo = Math.min(lo, mn);
-            hi = Math.max(hi, mx);
+            min[c] = mn;
+            max[c] = mx;
         }
-        return draw(cellMin, cellMax, lo, hi, width, rows, unicode);
     }
 
     private static List<String> draw(double[] cellMin, double[] cellMax, double lo, double hi, int width, int rows,

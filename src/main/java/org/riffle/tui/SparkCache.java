@@ -32,7 +32,7 @@ final class SparkCache {
     String line(ScreenState.Row row, Channel ch, Optional<BlockStats> blocks, int width, boolean unicode) {
         String key = row.source() + ":" + row.channel() + ":" + width + ":" + unicode;
         return lines.computeIfAbsent(key, k -> blocks.map(b -> Sparkline.renderRanges(b.minima(), b.maxima(),
-                width, unicode)).orElseGet(() -> Sparkline.render(ch.toDoubles(), width, unicode)));
+                width, unicode)).orElseGet(() -> Sparkline.render(ch::ranges, ch.size(), width, unicode)));
     }
 
     /** The trace of samples {@code [from, to)} of {@code ch} in {@code width} × {@code height} cells. */

@@ -36,7 +36,7 @@ class SparklineTest {
 
     @Test
     void fewerSamplesThanCellsRepeatSamples() {
-        float[] x = {0f, 1f};
+        double[] x = {0, 1};
         assertEquals("\u2581\u2581\u2588\u2588", Sparkline.render(x, 4, true));
     }
 
