@@ -133,27 +133,25 @@ public final class Thumbnail {
      * the whole grid's (compared as r·Q ≥ R·q, in whole numbers).
      */
     public boolean at(int x, int y) {
-        if (x < 0 || x >= width || y < 0 || y >= height) {
-            throw new IndexOutOfBoundsException("cell " + x + "," + y + " outside " + width + " × " + height);
-        }
-        int k = y * width + x;
+        int k = index(x, y);
         return recurrences[k] > 0 && (long) recurrences[k] * allPairs >= allRecurrences * pairs[k];
     }
 
     /** The recurrences in cell (x, y), both triangles. */
     public int recurrences(int x, int y) {
-        if (x < 0 || x >= width || y < 0 || y >= height) {
-            throw new IndexOutOfBoundsException("cell " + x + "," + y + " outside " + width + " × " + height);
-        }
-        return recurrences[y * width + x];
+        return recurrences[index(x, y)];
     }
 
     /** The pairs cell (x, y) covers outside the Theiler band. */
     public int pairs(int x, int y) {
+        return pairs[index(x, y)];
+    }
+
+    private int index(int x, int y) {
         if (x < 0 || x >= width || y < 0 || y >= height) {
             throw new IndexOutOfBoundsException("cell " + x + "," + y + " outside " + width + " × " + height);
         }
-        return pairs[y * width + x];
+        return y * width + x;
     }
 
     /** Number of cells set. */

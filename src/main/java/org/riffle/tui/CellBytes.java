@@ -1,5 +1,8 @@
 package org.riffle.tui;
 
+import java.nio.charset.Charset;
+import java.nio.charset.StandardCharsets;
+
 /**
  * The bytes a terminal is sent for one character of the screen, worked out directly. Lanterna encodes
  * each character through {@code Charset.encode} (a buffer, an encoder and a lookup per character,
@@ -14,12 +17,12 @@ final class CellBytes {
     private CellBytes() {
     }
 
-    /** The bytes of {@code c} on a UTF-8 terminal ({@code utf8}) or an ASCII one; null to leave it to Lanterna. */
-    static byte[] of(char c, boolean utf8) {
+    /** The bytes of {@code c} on a terminal of {@code charset} (UTF-8 or ASCII); null to leave it to Lanterna. */
+    static byte[] of(char c, Charset charset) {
         if (c < 0x80) {
             return new byte[] {(byte) c};
         }
-        if (!utf8 || Character.isSurrogate(c)) {
+        if (!StandardCharsets.UTF_8.equals(charset) || Character.isSurrogate(c)) {
             return null;
         }
         if (c < 0x800) {

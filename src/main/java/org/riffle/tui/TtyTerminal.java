@@ -9,7 +9,6 @@ import java.io.FileOutputStream;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.nio.charset.Charset;
-import java.nio.charset.StandardCharsets;
 import java.util.concurrent.atomic.AtomicInteger;
 
 /**
@@ -31,7 +30,6 @@ import java.util.concurrent.atomic.AtomicInteger;
  * Confined to the screen's threads as Lanterna's terminal is.
  */
 final class TtyTerminal extends UnixTerminal {
-    private final boolean utf8;
     /** The size the terminal last reported, until it signals a resize; null when it must be asked. */
     private volatile TerminalSize known;
     /** Counts resize signals, so that an answer to a question asked before one is not kept. */
@@ -39,7 +37,6 @@ final class TtyTerminal extends UnixTerminal {
 
     TtyTerminal(Charset charset) throws IOException {
         super(System.in, new Output(new FileOutputStream(FileDescriptor.out)), charset, CtrlCBehaviour.TRAP);
-        this.utf8 = charset.equals(StandardCharsets.UTF_8);
     }
 
     /**
@@ -73,7 +70,7 @@ final class TtyTerminal extends UnixTerminal {
     /** A character's bytes without an encoder per character (see {@link CellBytes}). */
     @Override
     protected byte[] translateCharacter(char c) {
-        byte[] b = CellBytes.of(c, utf8);
+        byte[] b = CellBytes.of(c, getCharset());
         return b != null ? b : super.translateCharacter(c);
     }
 

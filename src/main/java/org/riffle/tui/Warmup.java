@@ -6,7 +6,6 @@ import com.googlecode.lanterna.terminal.ansi.ANSITerminal;
 import java.io.InputStream;
 import java.io.OutputStream;
 import java.nio.charset.Charset;
-import java.nio.charset.StandardCharsets;
 import java.util.List;
 import java.util.Map;
 import org.riffle.log.Channel;
@@ -63,18 +62,16 @@ public final class Warmup {
      */
     static final class DryTerminal extends ANSITerminal {
         private final TerminalSize size;
-        private final boolean utf8;
-
+    
         DryTerminal(Charset charset, TerminalSize size) {
             super(InputStream.nullInputStream(), new TtyTerminal.Output(OutputStream.nullOutputStream()), charset);
             this.size = size;
-            this.utf8 = charset.equals(StandardCharsets.UTF_8);
-        }
+            }
 
         /** As {@link TtyTerminal} does. */
         @Override
         protected byte[] translateCharacter(char c) {
-            byte[] b = CellBytes.of(c, utf8);
+            byte[] b = CellBytes.of(c, getCharset());
             return b != null ? b : super.translateCharacter(c);
         }
 

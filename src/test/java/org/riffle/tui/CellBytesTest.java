@@ -14,14 +14,14 @@ class CellBytesTest {
             char c = (char) i;
             String s = String.valueOf(c);
             if (Character.isSurrogate(c)) {
-                assertNull(CellBytes.of(c, true), "a lone surrogate is left to Lanterna: " + i);
+                assertNull(CellBytes.of(c, StandardCharsets.UTF_8), "a lone surrogate is left to Lanterna: " + i);
                 continue;
             }
-            assertArrayEquals(s.getBytes(StandardCharsets.UTF_8), CellBytes.of(c, true), "U+" + Integer.toHexString(i));
+            assertArrayEquals(s.getBytes(StandardCharsets.UTF_8), CellBytes.of(c, StandardCharsets.UTF_8), "U+" + Integer.toHexString(i));
             if (c < 0x80) {
-                assertArrayEquals(s.getBytes(StandardCharsets.US_ASCII), CellBytes.of(c, false), "ASCII " + i);
+                assertArrayEquals(s.getBytes(StandardCharsets.US_ASCII), CellBytes.of(c, StandardCharsets.US_ASCII), "ASCII " + i);
             } else {
-                assertNull(CellBytes.of(c, false), "non-ASCII on an ASCII terminal is left to Lanterna: " + i);
+                assertNull(CellBytes.of(c, StandardCharsets.US_ASCII), "non-ASCII on an ASCII terminal is left to Lanterna: " + i);
             }
         }
     }
